@@ -1,0 +1,25 @@
+"""Run the engine over a spec: every quantity the workbook shows, by stable id.
+
+Each module here walks one part of the building and calls the engine's clause
+functions; none of them reads templates_src/ or the workbook.
+"""
+
+from __future__ import annotations
+
+from typing import Any
+
+from latbook.analysis.inputs import input_results
+from latbook.analysis.seismic import seismic_results
+from latbook.spec.models import Spec
+
+Results = dict[str, Any]
+
+STEPS = [input_results, seismic_results]
+
+
+def compute_results(spec: Spec) -> Results:
+    """Every quantity id -> value (float, or str for labels) for `spec`."""
+    results: Results = {}
+    for step in STEPS:
+        step(spec, results)
+    return results

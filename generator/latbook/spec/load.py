@@ -1,0 +1,63 @@
+"""Read a spec file into a validated `Spec`, turning every failure into `Problem`s."""
+
+from __future__ import annotations
+
+import json
+from pathlib import Path
+from typing import Any
+
+from pydantic import ValidationError
+
+from latbook.problems import Problem, SpecError, json_path
+from latbook.spec.models import Spec
+from latbook.spec.rules import check_rules
+
+_TAGGED_UNION_MEMBERS = {"site_class", "direct"}
+
+
+def load_spec(path: Path) -> Spec:
+    """Load and validate the spec at `path`; raise `SpecError` listing every problem."""
+    return parse_spec(load_json(path))
+
+
+def load_json(path: Path) -> Any:
+    """Read a JSON file; raise `SpecError` when it cannot be read or parsed."""
+    try:
+        text = Path(path).read_text(encoding="utf-8")
+    except OSError as exc:
+        raise SpecError([Problem("$", "file", f"cannot read {path}: {exc.strerror}")]) from None
+    except UnicodeDecodeError:
+        raise SpecError([Problem("$", "file", f"{path} is not UTF-8 text")]) from None
+    try:
+        data = json.loads(text)
+    except json.JSONDecodeError as exc:
+        problem = Problem("$", "json", f"not valid JSON: {exc.msg} at line {exc.lineno}")
+        raise SpecError([problem]) from None
+    return data
+
+
+def parse_spec(data: Any) -> Spec:
+    """Validate already-parsed JSON data; raise `SpecError` listing every problem."""
+    if not isinstance(data, dict):
+        raise SpecError([Problem("$", "type", "the spec must be a JSON object")])
+    try:
+        spec = Spec.model_validate(data)
+    except ValidationError as exc:
+        raise SpecError([_problem_from_pydantic(err) for err in exc.errors()]) from None
+    problems = check_rules(spec)
+    if problems:
+        raise SpecError(problems)
+    return spec
+
+
+def _problem_from_pydantic(err: dict[str, Any]) -> Problem:
+    loc = [part for part in err["loc"] if part not in _TAGGED_UNION_MEMBERS]
+    message = err["msg"].removeprefix("Value error, ")
+    kind = err["type"]
+    if kind == "extra_forbidden":
+        message = "unknown field (check the spelling against the schema)"
+    elif kind == "missing":
+        message = "required field is missing"
+    elif kind == "literal_error" and "ctx" in err:
+        message = f"must be one of {err['ctx'].get('expected')}"
+    return Problem(json_path(loc), kind, message)

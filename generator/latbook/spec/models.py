@@ -1,0 +1,260 @@
+"""The project spec: pydantic models of the JSON a user writes.
+
+Every dimensional field carries its unit in its name. Models forbid unknown keys so a
+typo is reported, not ignored. Cross-field rules live in `latbook.spec.rules`.
+"""
+
+from __future__ import annotations
+
+from typing import Annotated, Literal
+
+from pydantic import BaseModel, ConfigDict, Field, model_validator
+
+MAX_LEVELS = 12
+MAX_WALL_LINES = 80
+MAX_SEGMENTS_PER_STORY = 40
+MAX_OPENINGS_PER_STORY = 40
+MAX_ASSEMBLIES = 40
+MAX_TEXT = 500
+
+Identifier = Annotated[
+    str,
+    Field(
+        min_length=1,
+        max_length=12,
+        pattern=r"^[A-Za-z0-9][A-Za-z0-9_-]*$",
+        description="Short id: letters, digits, '_' or '-', starting with a letter or digit.",
+    ),
+]
+Text = Annotated[str, Field(max_length=MAX_TEXT)]
+PositiveFt = Annotated[float, Field(gt=0, le=2000)]
+Coordinate = Annotated[float, Field(ge=-5000, le=5000)]
+
+
+class _Strict(BaseModel):
+    model_config = ConfigDict(extra="forbid", frozen=True)
+
+
+class Project(_Strict):
+    """Who, what and which revision: printed on the cover and in every page header."""
+
+    name: Text = Field(min_length=1)
+    number: Text = ""
+    location: Text = ""
+    client: Text = ""
+    engineer: Text = ""
+    checker: Text = ""
+    date: Text = Field("", description="Issue date as the engineer writes it, e.g. 2026-12-02.")
+    revision: Text = "0"
+    notes: Text = ""
+
+
+class CodeBasis(_Strict):
+    """The standards the calculation follows. Only these editions are implemented."""
+
+    loads: Literal["ASCE 7-16"] = "ASCE 7-16"
+    wood: Literal["AWC SDPWS-2015"] = "AWC SDPWS-2015"
+
+
+class Plan(_Strict):
+    """Rectangular plan extents of a level's diaphragm, ft."""
+
+    x_min_ft: Coordinate = 0.0
+    x_max_ft: Coordinate
+    y_min_ft: Coordinate = 0.0
+    y_max_ft: Coordinate
+
+    @model_validator(mode="after")
+    def _extents_positive(self) -> Plan:
+        if not self.x_max_ft > self.x_min_ft:
+            raise ValueError("x_max_ft must be greater than x_min_ft")
+        if not self.y_max_ft > self.y_min_ft:
+            raise ValueError("y_max_ft must be greater than y_min_ft")
+        return self
+
+
+class Level(_Strict):
+    """A diaphragm level: its elevation above the base, seismic weight and plan."""
+
+    id: Identifier
+    name: Text = ""
+    elevation_ft: Annotated[float, Field(gt=0, le=400)]
+    seismic_weight_kip: Annotated[float, Field(gt=0, le=1.0e6)]
+    plan: Plan
+    diaphragm_assembly: Identifier | None = Field(
+        None, description="Id of an entry in assemblies.diaphragms."
+    )
+
+
+class Building(_Strict):
+    """Levels and the ordering convention they are listed in."""
+
+    level_order: Literal["bottom_up", "top_down"] = Field(
+        "bottom_up", description="Order of `levels`: elevations must strictly follow it."
+    )
+    risk_category: Literal["I", "II", "III", "IV"] = "II"
+    levels: list[Level] = Field(min_length=1, max_length=MAX_LEVELS)
+
+
+class SiteClassMotion(_Strict):
+    """Mapped accelerations and site class: Fa, Fv from ASCE 7-16 Tables 11.4-1/11.4-2."""
+
+    method: Literal["site_class"]
+    Ss_g: Annotated[float, Field(ge=0, le=5.0)]
+    S1_g: Annotated[float, Field(ge=0, le=3.0)]
+    site_class: Literal["A", "B", "C", "D", "E"]
+
+
+class DirectMotion(_Strict):
+    """Design accelerations given directly (e.g. from a site-specific study)."""
+
+    method: Literal["direct"]
+    SDS_g: Annotated[float, Field(gt=0, le=4.0)]
+    SD1_g: Annotated[float, Field(gt=0, le=3.0)]
+    S1_g: Annotated[float, Field(ge=0, le=3.0)]
+
+
+GroundMotion = Annotated[SiteClassMotion | DirectMotion, Field(discriminator="method")]
+
+
+class SeismicSystem(_Strict):
+    """Seismic force-resisting system (ASCE 7-16 Table 12.2-1 row chosen by the engineer)."""
+
+    label: Text = Field(min_length=1)
+    R: Annotated[float, Field(ge=1.0, le=8.0)]
+    Cd: Annotated[float, Field(ge=1.0, le=6.5)]
+    Omega0: Annotated[float, Field(ge=1.0, le=3.0)]
+
+
+class Seismic(_Strict):
+    """Seismic hazard and system for the equivalent lateral force procedure."""
+
+    ground_motion: GroundMotion
+    system: SeismicSystem
+    structure_type: Literal[
+        "steel_moment_frame", "concrete_moment_frame", "steel_eccentric_braced_frame", "all_other"
+    ] = Field("all_other", description="ASCE 7-16 Table 12.8-2 row for Ct and x.")
+    TL_s: Annotated[float, Field(gt=0, le=20)] = 8.0
+    T_computed_s: Annotated[float, Field(gt=0, le=10)] | None = Field(
+        None, description="Period from a substantiated analysis; capped at Cu Ta."
+    )
+    rho: Literal[1.0, 1.3] = Field(1.0, description="Redundancy factor, ASCE 7-16 §12.3.4.")
+
+
+class Wind(_Strict):
+    """MWFRS wind, directional procedure (ASCE 7-16 ch. 26-27 Part 1)."""
+
+    V_mph: Annotated[float, Field(ge=85, le=300)]
+    exposure: Literal["B", "C", "D"]
+    Kzt: Annotated[float, Field(ge=1.0, le=3.0)] = 1.0
+    Kd: Annotated[float, Field(gt=0, le=1.0)] = 0.85
+    ground_elevation_ft: Annotated[float, Field(ge=-500, le=15000)] = 0.0
+    use_Ke: bool = Field(True, description="False takes Ke = 1.0, always permitted (§26.9).")
+    G: Annotated[float, Field(gt=0, le=2.0)] = 0.85
+    enclosure: Literal["enclosed", "partially_enclosed"] = "enclosed"
+    mean_roof_height_ft: Annotated[float, Field(gt=0, le=400)]
+    parapet_height_ft: Annotated[float, Field(ge=0, le=20)] = 0.0
+
+
+class DiaphragmAssembly(_Strict):
+    """A diaphragm sheathing/nailing assembly and its nominal unit shear capacities."""
+
+    id: Identifier
+    description: Text = ""
+    vs_nominal_plf: Annotated[float, Field(gt=0, le=10000)]
+    vw_nominal_plf: Annotated[float, Field(gt=0, le=15000)]
+
+
+class ShearWallAssembly(_Strict):
+    """A shear-wall assembly: nominal capacities, stiffness and end-post/hold-down data."""
+
+    id: Identifier
+    description: Text = ""
+    vs_nominal_plf: Annotated[float, Field(gt=0, le=10000)]
+    vw_nominal_plf: Annotated[float, Field(gt=0, le=15000)]
+    Ga_seismic_kips_per_in: Annotated[float, Field(gt=0, le=500)]
+    Ga_wind_kips_per_in: Annotated[float, Field(gt=0, le=500)] | None = None
+    end_post_E_psi: Annotated[float, Field(gt=0, le=5.0e7)] = 1.6e6
+    end_post_A_in2: Annotated[float, Field(gt=0, le=500)]
+    hold_down_delta_in: Annotated[float, Field(ge=0, le=2.0)]
+
+
+class Assemblies(_Strict):
+    diaphragms: list[DiaphragmAssembly] = Field(default_factory=list, max_length=MAX_ASSEMBLIES)
+    shear_walls: list[ShearWallAssembly] = Field(default_factory=list, max_length=MAX_ASSEMBLIES)
+
+
+class Segment(_Strict):
+    """A full-height shear-wall segment on a wall line at one story."""
+
+    id: Identifier
+    start_ft: Annotated[float, Field(ge=0, le=5000)] = Field(
+        description="Distance along the line from the line's start (plan minimum), ft."
+    )
+    length_ft: Annotated[float, Field(gt=0, le=1000)]
+    assembly: Identifier
+    height_ft: PositiveFt | None = Field(None, description="Default: the story height.")
+    dead_load_plf: Annotated[float, Field(ge=0, le=20000)] = 0.0
+    point_load_start_lb: Annotated[float, Field(ge=0, le=1.0e6)] = 0.0
+    point_load_end_lb: Annotated[float, Field(ge=0, le=1.0e6)] = 0.0
+    hold_down_offset_ft: Annotated[float, Field(ge=0, le=5)] = 0.25
+    hold_down_continues_below: bool = Field(
+        False, description="True: the hold-down stacks onto the segment below."
+    )
+
+
+class Opening(_Strict):
+    start_ft: Annotated[float, Field(ge=0, le=5000)]
+    length_ft: Annotated[float, Field(gt=0, le=1000)]
+    label: Text = ""
+
+
+class LineStory(_Strict):
+    """The walls of one wall line in the story below `level` (the level they support)."""
+
+    level: Identifier
+    segments: list[Segment] = Field(default_factory=list, max_length=MAX_SEGMENTS_PER_STORY)
+    openings: list[Opening] = Field(default_factory=list, max_length=MAX_OPENINGS_PER_STORY)
+
+
+class WallLine(_Strict):
+    """A line of shear walls parallel to x or y at a fixed plan position."""
+
+    id: Identifier
+    direction: Literal["x", "y"] = Field(
+        description="'x': the line runs parallel to x and resists loads in x."
+    )
+    position_ft: Coordinate = Field(description="y of an x-line, or x of a y-line, ft.")
+    stories: list[LineStory] = Field(min_length=1, max_length=MAX_LEVELS)
+
+
+class DriftLimits(_Strict):
+    seismic_row: Literal[
+        "four_story_drift_tolerant", "masonry_cantilever", "other_masonry", "all_other"
+    ] = Field("all_other", description="ASCE 7-16 Table 12.12-1 row.")
+    wind_ratio: Annotated[float, Field(ge=100, le=2000)] = Field(
+        400, description="Wind drift limit h/ratio: serviceability, common practice, no code limit."
+    )
+
+
+class Spec(_Strict):
+    """A latbook project spec."""
+
+    model_config = ConfigDict(extra="forbid", frozen=True, populate_by_name=True)
+
+    schema_ref: str | None = Field(None, alias="$schema", description="Editor hint; ignored.")
+    project: Project
+    code: CodeBasis = CodeBasis()
+    design_method: Literal["ASD", "LRFD"]
+    building: Building
+    seismic: Seismic | None = None
+    wind: Wind | None = None
+    assemblies: Assemblies = Assemblies()
+    wall_lines: list[WallLine] = Field(default_factory=list, max_length=MAX_WALL_LINES)
+    drift: DriftLimits = DriftLimits()
+
+    @model_validator(mode="after")
+    def _some_load(self) -> Spec:
+        if self.seismic is None and self.wind is None:
+            raise ValueError("give at least one of 'seismic' or 'wind'")
+        return self

@@ -1,0 +1,234 @@
+"""Cross-field rules a schema cannot express; each broken rule is one `Problem`."""
+
+from __future__ import annotations
+
+from collections.abc import Iterator
+
+from latbook.problems import Problem, json_path
+from latbook.spec.models import Level, Spec, WallLine
+
+_EPS_FT = 1e-6
+
+
+def check_rules(spec: Spec) -> list[Problem]:
+    """Every cross-field problem in `spec`, in document order."""
+    return [
+        *_levels(spec),
+        *_assembly_ids(spec),
+        *_wall_lines(spec),
+        *_wind(spec),
+        *_seismic(spec),
+    ]
+
+
+def _levels(spec: Spec) -> Iterator[Problem]:
+    levels = spec.building.levels
+    seen: set[str] = set()
+    for i, level in enumerate(levels):
+        if level.id in seen:
+            yield Problem(
+                json_path(("building", "levels", i, "id")), "unique", "duplicate level id"
+            )
+        seen.add(level.id)
+    increasing = spec.building.level_order == "bottom_up"
+    for i in range(1, len(levels)):
+        lower, upper = (levels[i - 1], levels[i]) if increasing else (levels[i], levels[i - 1])
+        if not upper.elevation_ft > lower.elevation_ft:
+            word = "increase" if increasing else "decrease"
+            yield Problem(
+                json_path(("building", "levels", i, "elevation_ft")),
+                "elevation_order",
+                f"elevations must strictly {word} down the list (level_order is "
+                f"'{spec.building.level_order}')",
+            )
+    names = {a.id for a in spec.assemblies.diaphragms}
+    for i, level in enumerate(levels):
+        if level.diaphragm_assembly is not None and level.diaphragm_assembly not in names:
+            yield Problem(
+                json_path(("building", "levels", i, "diaphragm_assembly")),
+                "reference",
+                f"no diaphragm assembly with id '{level.diaphragm_assembly}'",
+            )
+        if spec.wall_lines and level.diaphragm_assembly is None:
+            yield Problem(
+                json_path(("building", "levels", i, "diaphragm_assembly")),
+                "required",
+                "a level with wall lines below needs a diaphragm assembly",
+            )
+
+
+def _assembly_ids(spec: Spec) -> Iterator[Problem]:
+    for group in ("diaphragms", "shear_walls"):
+        seen: set[str] = set()
+        for i, item in enumerate(getattr(spec.assemblies, group)):
+            if item.id in seen:
+                path = json_path(("assemblies", group, i, "id"))
+                yield Problem(path, "unique", "duplicate assembly id")
+            seen.add(item.id)
+
+
+def line_length_ft(line: WallLine, level: Level) -> float:
+    """Length of a wall line across the level's plan (the diaphragm depth there)."""
+    plan = level.plan
+    return plan.x_max_ft - plan.x_min_ft if line.direction == "x" else plan.y_max_ft - plan.y_min_ft
+
+
+def _wall_lines(spec: Spec) -> Iterator[Problem]:
+    if not spec.wall_lines:
+        return
+    levels = {lv.id: lv for lv in spec.building.levels}
+    order = [lv.id for lv in sorted(spec.building.levels, key=lambda lv: lv.elevation_ft)]
+    walls = {a.id for a in spec.assemblies.shear_walls}
+    seen: set[str] = set()
+    for li, line in enumerate(spec.wall_lines):
+        base = ("wall_lines", li)
+        if line.id in seen:
+            yield Problem(json_path((*base, "id")), "unique", "duplicate wall line id")
+        seen.add(line.id)
+        story_levels: list[str] = []
+        for si, story in enumerate(line.stories):
+            spath = (*base, "stories", si)
+            level = levels.get(story.level)
+            if level is None:
+                yield Problem(json_path((*spath, "level")), "reference", "no level with that id")
+                continue
+            if story.level in story_levels:
+                yield Problem(json_path((*spath, "level")), "unique", "story listed twice")
+                continue
+            story_levels.append(story.level)
+            yield from _line_story(line, level, story, spath, walls)
+        yield from _line_continuity(line, story_levels, order, base)
+    yield from _two_lines_each_way(spec)
+
+
+def _line_story(line, level, story, spath, walls) -> Iterator[Problem]:
+    plan = level.plan
+    lo, hi = (
+        (plan.y_min_ft, plan.y_max_ft) if line.direction == "x" else (plan.x_min_ft, plan.x_max_ft)
+    )
+    if not lo - _EPS_FT <= line.position_ft <= hi + _EPS_FT:
+        yield Problem(
+            json_path((*spath[:2], "position_ft")),
+            "inside_plan",
+            f"line position {line.position_ft:g} ft is outside level '{level.id}' plan "
+            f"({lo:g} to {hi:g} ft)",
+        )
+    length = line_length_ft(line, level)
+    if not story.segments:
+        yield Problem(json_path((*spath, "segments")), "required", "a story needs a segment")
+    spans: list[tuple[float, float, int]] = []
+    ids: set[str] = set()
+    for gi, seg in enumerate(story.segments):
+        gpath = (*spath, "segments", gi)
+        if seg.id in ids:
+            yield Problem(json_path((*gpath, "id")), "unique", "duplicate segment id in story")
+        ids.add(seg.id)
+        if seg.assembly not in walls:
+            yield Problem(
+                json_path((*gpath, "assembly")),
+                "reference",
+                f"no shear-wall assembly with id '{seg.assembly}'",
+            )
+        end = seg.start_ft + seg.length_ft
+        if end > length + _EPS_FT:
+            yield Problem(
+                json_path((*gpath, "length_ft")),
+                "inside_line",
+                f"segment ends at {end:g} ft, past the line's length {length:g} ft",
+            )
+        if seg.hold_down_offset_ft * 2 >= seg.length_ft:
+            yield Problem(
+                json_path((*gpath, "hold_down_offset_ft")),
+                "range",
+                "hold-down offset must be less than half the segment length",
+            )
+        spans.append((seg.start_ft, end, gi))
+    spans.sort()
+    for (_, end_a, _), (start_b, _, gb) in zip(spans, spans[1:], strict=False):
+        if start_b < end_a - _EPS_FT:
+            yield Problem(
+                json_path((*spath, "segments", gb, "start_ft")),
+                "no_overlap",
+                "segment overlaps another segment on the line",
+            )
+    for oi, opening in enumerate(story.openings):
+        if opening.start_ft + opening.length_ft > length + _EPS_FT:
+            yield Problem(
+                json_path((*spath, "openings", oi, "length_ft")),
+                "inside_line",
+                "opening runs past the line's length",
+            )
+        for s0, s1, _ in spans:
+            if (
+                opening.start_ft < s1 - _EPS_FT
+                and opening.start_ft + opening.length_ft > s0 + _EPS_FT
+            ):
+                yield Problem(
+                    json_path((*spath, "openings", oi, "start_ft")),
+                    "no_overlap",
+                    "opening overlaps a shear-wall segment",
+                )
+                break
+
+
+def _line_continuity(line, story_levels, order, base) -> Iterator[Problem]:
+    """A line carrying shear in a story must continue in every story below it."""
+    if not story_levels:
+        return
+    top = max(order.index(lv) for lv in story_levels)
+    for lv in order[:top]:
+        if lv not in story_levels:
+            yield Problem(
+                json_path((*base, "stories")),
+                "continuity",
+                f"line '{line.id}' has walls above level '{lv}' but none in the story below it; "
+                "its shear has no path down (walls offset out of plane are not supported yet)",
+            )
+            return
+
+
+def _two_lines_each_way(spec: Spec) -> Iterator[Problem]:
+    for i, level in enumerate(spec.building.levels):
+        for direction in ("x", "y"):
+            lines = [
+                ln
+                for ln in spec.wall_lines
+                if ln.direction == direction
+                and any(st.level == level.id and st.segments for st in ln.stories)
+            ]
+            if len(lines) < 2:
+                yield Problem(
+                    json_path(("building", "levels", i)),
+                    "two_lines",
+                    f"level '{level.id}' needs at least two {direction}-direction wall lines "
+                    f"with walls in the story below it (found {len(lines)})",
+                )
+
+
+def _wind(spec: Spec) -> Iterator[Problem]:
+    if spec.wind is None:
+        return
+    top = max(lv.elevation_ft for lv in spec.building.levels)
+    if spec.wind.mean_roof_height_ft < top - _EPS_FT:
+        yield Problem(
+            "$.wind.mean_roof_height_ft",
+            "range",
+            f"mean roof height is below the highest level ({top:g} ft)",
+        )
+
+
+def _seismic(spec: Spec) -> Iterator[Problem]:
+    if spec.seismic is None or spec.seismic.ground_motion.method != "site_class":
+        return
+    from latbook.engine.asce7_16 import site
+    from latbook.engine.errors import CodeLimitError
+
+    gm = spec.seismic.ground_motion
+    for field, call in (
+        ("Ss_g", lambda: site.Fa(gm.site_class, gm.Ss_g)),
+        ("S1_g", lambda: site.Fv(gm.site_class, gm.S1_g)),
+    ):
+        try:
+            call()
+        except CodeLimitError as exc:
+            yield Problem(f"$.seismic.ground_motion.{field}", "site_specific", str(exc))

@@ -1,0 +1,1 @@
+"""The workbook half: templates_src rendered into a live-formula .xlsx."""

@@ -1,0 +1,241 @@
+"""Build the workbook: lay out every sheet, then write cells with cached engine values.
+
+The builder owns the xlsxwriter Workbook. It never computes an engineering number:
+cached values come from the engine's results, keyed by quantity id.
+"""
+
+from __future__ import annotations
+
+import datetime as dt
+import json
+import os
+import tempfile
+from collections.abc import Mapping
+from pathlib import Path
+from typing import Any
+
+import xlsxwriter
+from xlsxwriter.worksheet import Worksheet
+
+from latbook import __version__
+from latbook.spec.models import Spec
+from latbook.workbook.cautions import CAUTION_SHORT
+from latbook.workbook.context import build_context
+from latbook.workbook.cover import COVER_SHEET, write_cover
+from latbook.workbook.formula import render
+from latbook.workbook.index_sheet import INDEX_SHEET, write_index
+from latbook.workbook.layout import COL_CLAUSE, Cell, SheetPlan, plan_sheets
+from latbook.workbook.registry import Registry
+from latbook.workbook.styles import Styles
+from latbook.workbook.tables_sheet import TABLES_SHEET, write_tables
+from latbook.workbook.templates import all_templates, reference_tables
+
+SPEC_SHEET = "SpecData"
+SPEC_CHUNK = 30000
+FIXED_TIMESTAMP = dt.datetime(2000, 1, 1, 0, 0, 0)
+SCALAR_WIDTHS = {0: 46, 1: 10, 2: 14, 3: 10, 4: 34}
+TABLE_WIDTH = 12
+
+
+class BuildError(RuntimeError):
+    """The generator and the engine disagree about what exists: a developer error."""
+
+
+def layout(spec: Spec) -> tuple[list[SheetPlan], Registry]:
+    """Every sheet's plan and the registry, without writing anything."""
+    registry = Registry()
+    plans = plan_sheets(all_templates(), build_context(spec), registry)
+    return plans, registry
+
+
+def write_workbook(
+    spec: Spec,
+    results: Mapping[str, Any],
+    path: Path,
+    *,
+    spec_json: str,
+    spec_sha256: str,
+    protect: bool = True,
+) -> Registry:
+    """Write the workbook for `spec` to `path` atomically; returns the registry."""
+    plans, registry = layout(spec)
+    missing = [e.id for e in registry.calcs() if e.id not in results]
+    if missing:
+        raise BuildError(f"the engine has no value for {len(missing)} cells, e.g. {missing[:5]}")
+    path = Path(path)
+    fd, tmp = tempfile.mkstemp(prefix=f".{path.name}.", suffix=".tmp", dir=path.parent or ".")
+    os.close(fd)
+    try:
+        _write(spec, results, plans, registry, Path(tmp), spec_json, spec_sha256, protect)
+        os.replace(tmp, path)
+    except BaseException:
+        Path(tmp).unlink(missing_ok=True)
+        raise
+    return registry
+
+
+def _write(spec, results, plans, registry, tmp, spec_json, spec_sha256, protect) -> None:
+    wb = xlsxwriter.Workbook(str(tmp), {"strings_to_formulas": False, "strings_to_urls": False})
+    wb.set_properties(
+        {
+            "title": f"Lateral calculation: {spec.project.name}",
+            "subject": "Lateral force-resisting system",
+            "author": spec.project.engineer,
+            "comments": CAUTION_SHORT,
+            "created": FIXED_TIMESTAMP,
+        }
+    )
+    wb.set_custom_property("latbook_version", __version__)
+    wb.set_custom_property("latbook_spec_sha256", spec_sha256)
+    wb.set_calc_mode("auto")
+    styles = Styles(wb)
+    header = _page_header(spec)
+
+    cover = wb.add_worksheet(COVER_SHEET)
+    last = write_cover(cover, spec, spec_sha256, styles)
+    _finish_sheet(cover, header, last, 1, protect, landscape=False)
+
+    sheets = {plan.name: wb.add_worksheet(plan.name) for plan in plans}
+    for plan in plans:
+        _write_plan(sheets[plan.name], plan, registry, results, styles)
+        ws = sheets[plan.name]
+        for top, bottom in plan.header_rows[:1]:
+            ws.repeat_rows(top, bottom)
+        _finish_sheet(ws, header, plan.last_row, plan.last_col, protect, plan.template.landscape)
+
+    for name, qid in sorted(registry.names.items()):
+        entry = registry.entries[qid]
+        wb.define_name(name, f"={entry.sheet}!${_col_letter(entry.col)}${entry.row + 1}")
+
+    tables = wb.add_worksheet(TABLES_SHEET)
+    last = write_tables(wb, tables, reference_tables(), styles)
+    _finish_sheet(tables, header, last, 7, protect, landscape=False)
+
+    index = wb.add_worksheet(INDEX_SHEET)
+    last = write_index(index, registry, styles)
+    _finish_sheet(index, header, last, 6, protect, landscape=True)
+
+    data = wb.add_worksheet(SPEC_SHEET)
+    _write_spec_data(data, spec_json, spec_sha256, styles)
+    data.hide()
+    data.protect()
+    wb.close()
+
+
+def _write_plan(ws: Worksheet, plan: SheetPlan, registry: Registry, results, styles) -> None:
+    for col, width in SCALAR_WIDTHS.items():
+        ws.set_column(col, col, max(width, plan.widths.get(col, 0)))
+    for col in range(len(SCALAR_WIDTHS), plan.last_col + 1):
+        ws.set_column(col, col, plan.widths.get(col, TABLE_WIDTH))
+    ws.write_string(0, 0, plan.title, styles.get("title"))
+    ws.write_string(1, 0, CAUTION_SHORT, styles.get("caution"))
+    tables = registry.tables
+    for cell in plan.cells:
+        _write_cell(ws, plan.name, cell, registry, tables, results, styles)
+
+
+def _write_cell(ws, sheet, cell: Cell, registry, tables, results, styles) -> None:
+    fmt = styles.get(cell.style, cell.fmt)
+    if cell.formula is not None:
+        formula = render(
+            cell.formula,
+            registry=registry,
+            sheet=sheet,
+            ctx=cell.ctx,
+            table=tables.get(cell.table) if cell.table else None,
+            row=cell.row,
+        )
+        ws.write_formula(cell.row, cell.col, formula, fmt, _cached(results[cell.qid]))
+    elif cell.style == "input":
+        _write_input(ws, cell, fmt)
+    elif cell.text is not None:
+        ws.write_string(cell.row, cell.col, cell.text, fmt)
+
+
+def _cached(value: Any) -> Any:
+    if isinstance(value, bool):
+        return "TRUE" if value else "FALSE"
+    return value
+
+
+def _write_input(ws: Worksheet, cell: Cell, fmt) -> None:
+    value = cell.value
+    if isinstance(value, bool):
+        ws.write_boolean(cell.row, cell.col, value, fmt)
+    elif isinstance(value, int | float):
+        ws.write_number(cell.row, cell.col, value, fmt)
+    else:
+        ws.write_string(cell.row, cell.col, "" if value is None else str(value), fmt)
+    v = cell.validation
+    if not v:
+        return
+    if "choices" in v:
+        rule = {"validate": "list", "source": [str(c) for c in v["choices"]]}
+    else:
+        rule = {
+            "validate": "decimal",
+            "criteria": "between",
+            "minimum": v.get("min", -1e12),
+            "maximum": v.get("max", 1e12),
+        }
+    rule["error_message"] = v.get("message", "Value outside the range this input allows.")
+    ws.data_validation(cell.row, cell.col, cell.row, cell.col, rule)
+
+
+def _page_header(spec: Spec) -> tuple[str, str]:
+    p = spec.project
+    esc = _escape_header
+    head = f"&L{esc(p.name)} {esc(p.number)}&C&A&RRev {esc(p.revision)}  {esc(p.date)}"
+    foot = "&Llatbook " + __version__ + "&CPage &P of &N&R" + esc(CAUTION_SHORT[:60]) + "..."
+    return head, foot
+
+
+def _escape_header(text: str) -> str:
+    return text.replace("&", "&&")[:60]
+
+
+def _finish_sheet(ws, header, last_row, last_col, protect, landscape) -> None:
+    head, foot = header
+    ws.set_header(head)
+    ws.set_footer(foot)
+    if landscape:
+        ws.set_landscape()
+    else:
+        ws.set_portrait()
+    ws.set_paper(1)  # US Letter
+    ws.fit_to_pages(1, 0)
+    ws.print_area(0, 0, max(last_row, 1), max(last_col, COL_CLAUSE))
+    ws.set_margins(left=0.5, right=0.5, top=0.75, bottom=0.75)
+    if protect:
+        ws.protect(
+            "",
+            {
+                "select_locked_cells": True,
+                "select_unlocked_cells": True,
+                "format_columns": True,
+                "format_rows": True,
+            },
+        )
+
+
+def _write_spec_data(ws: Worksheet, spec_json: str, spec_sha256: str, styles) -> None:
+    ws.write_string(0, 0, "latbook_version", styles.get("text"))
+    ws.write_string(0, 1, __version__, styles.get("text"))
+    ws.write_string(1, 0, "spec_sha256", styles.get("text"))
+    ws.write_string(1, 1, spec_sha256, styles.get("text"))
+    ws.write_string(2, 0, "spec_json_chunks", styles.get("text"))
+    chunks = [spec_json[i : i + SPEC_CHUNK] for i in range(0, len(spec_json), SPEC_CHUNK)]
+    ws.write_number(2, 1, len(chunks))
+    for i, chunk in enumerate(chunks):
+        ws.write_string(3 + i, 1, chunk, styles.get("text"))
+
+
+def canonical_json(data: Any) -> str:
+    """The spec as canonical JSON (sorted keys, no spaces): what the SHA-256 is taken of."""
+    return json.dumps(data, sort_keys=True, separators=(",", ":"), ensure_ascii=False)
+
+
+def _col_letter(col: int) -> str:
+    from xlsxwriter.utility import xl_col_to_name
+
+    return xl_col_to_name(col)

@@ -1,0 +1,77 @@
+"""What the templates iterate over: flags and row collections derived from the spec.
+
+This is layout information only (which rows exist, in which order); no engineering
+numbers are computed here.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass, field
+from typing import Any
+
+from latbook.spec.models import Spec
+
+
+@dataclass
+class Context:
+    flags: set[str]
+    collections: dict[str, list[dict[str, Any]]]
+    spec_data: dict[str, Any]
+    extra: dict[str, Any] = field(default_factory=dict)
+
+    def holds(self, when: str | None) -> bool:
+        """True when every term of `when` ("a and !b") holds."""
+        if not when:
+            return True
+        for term in when.split(" and "):
+            term = term.strip()
+            negate = term.startswith("!")
+            if (term.lstrip("!") in self.flags) == negate:
+                return False
+        return True
+
+
+def build_context(spec: Spec) -> Context:
+    """Flags and collections for `spec`; collection builders register themselves below."""
+    flags: set[str] = {f"method_{spec.design_method}"}
+    if spec.seismic is not None:
+        flags.add("seismic")
+        flags.add(f"motion_{spec.seismic.ground_motion.method}")
+        if spec.seismic.T_computed_s is not None:
+            flags.add("T_computed")
+    if spec.wind is not None:
+        flags.add("wind")
+        if spec.wind.parapet_height_ft > 0:
+            flags.add("parapet")
+    if spec.wall_lines:
+        flags.add("walls")
+    ctx = Context(
+        flags=flags,
+        collections={},
+        spec_data=spec.model_dump(mode="json", by_alias=True, exclude={"schema_ref"}),
+    )
+    for builder in COLLECTION_BUILDERS:
+        ctx.collections.update(builder(spec))
+    return ctx
+
+
+def levels_collections(spec: Spec) -> dict[str, list[dict[str, Any]]]:
+    """Levels top-down (roof first), each with its spec index and the level below."""
+    indexed = sorted(enumerate(spec.building.levels), key=lambda p: -p[1].elevation_ft)
+    rows: list[dict[str, Any]] = []
+    for n, (index, level) in enumerate(indexed):
+        below = indexed[n + 1][1].id if n + 1 < len(indexed) else None
+        rows.append(
+            {
+                "level": level.id,
+                "level_name": level.name or level.id,
+                "row_label": f"level {level.id}",
+                "index": index,
+                "below": below,
+                "variants": [v for v, on in (("top", n == 0), ("lowest", below is None)) if on],
+            }
+        )
+    return {"levels_top_down": rows}
+
+
+COLLECTION_BUILDERS = [levels_collections]

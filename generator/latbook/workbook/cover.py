@@ -1,0 +1,60 @@
+"""The cover sheet: project block, code basis, provenance and the cautions."""
+
+from __future__ import annotations
+
+from xlsxwriter.worksheet import Worksheet
+
+from latbook import __version__
+from latbook.spec.models import Spec
+from latbook.workbook.cautions import CAUTION_LINES
+from latbook.workbook.styles import Styles
+
+COVER_SHEET = "Cover"
+
+
+def write_cover(ws: Worksheet, spec: Spec, spec_sha256: str, styles: Styles) -> int:
+    """Write the cover; returns the last row used."""
+    ws.set_column(0, 0, 24)
+    ws.set_column(1, 1, 80)
+    ws.write_string(0, 0, "Lateral force-resisting system calculation", styles.get("title"))
+    p = spec.project
+    rows = [
+        ("Project", p.name),
+        ("Project number", p.number),
+        ("Location", p.location),
+        ("Client", p.client),
+        ("Engineer", p.engineer),
+        ("Checker", p.checker),
+        ("Date", p.date),
+        ("Revision", p.revision),
+        ("Notes", p.notes),
+        ("Loads standard", spec.code.loads),
+        ("Wood standard", spec.code.wood),
+        ("Design method", spec.design_method),
+        ("Procedures", _procedures(spec)),
+        ("Generator", f"latbook {__version__}"),
+        ("Spec SHA-256", spec_sha256),
+    ]
+    row = 2
+    for label, value in rows:
+        ws.write_string(row, 0, label, styles.get("cover_label"))
+        ws.write_string(row, 1, value, styles.get("cover_value"))
+        row += 1
+    row += 1
+    ws.write_string(row, 0, "Cautions", styles.get("cover_label"))
+    for line in CAUTION_LINES:
+        ws.set_row(row, 30)
+        ws.write_string(row, 1, line, styles.get("cover_warning"))
+        row += 1
+    return row
+
+
+def _procedures(spec: Spec) -> str:
+    parts = []
+    if spec.seismic is not None:
+        parts.append("seismic ELF (ASCE 7-16 §12.8), diaphragm forces (§12.10)")
+    if spec.wind is not None:
+        parts.append("MWFRS wind, directional procedure (ASCE 7-16 ch. 27 Part 1)")
+    if spec.wall_lines:
+        parts.append("flexible diaphragms by tributary area; shear walls (AWC SDPWS-2015)")
+    return "; ".join(parts)

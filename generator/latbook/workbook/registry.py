@@ -1,0 +1,78 @@
+"""Where everything landed: quantity id -> cell, table name -> rows and columns."""
+
+from __future__ import annotations
+
+from dataclasses import dataclass, field
+
+from xlsxwriter.utility import xl_rowcol_to_cell
+
+
+def a1(row: int, col: int, absolute: bool = False) -> str:
+    """Zero-based (row, col) -> 'C5' (or '$C$5')."""
+    return xl_rowcol_to_cell(row, col, row_abs=absolute, col_abs=absolute)
+
+
+@dataclass(frozen=True)
+class Entry:
+    """One registered quantity: a calculated cell or an input cell."""
+
+    id: str
+    sheet: str
+    row: int
+    col: int
+    kind: str  # "input" or "calc"
+    label: str
+    unit: str = ""
+    clause: str = ""
+    name: str | None = None
+    spec_path: str | None = None
+    choices: tuple[str, ...] | None = None
+    minimum: float | None = None
+    maximum: float | None = None
+
+    @property
+    def address(self) -> str:
+        return f"{self.sheet}!{a1(self.row, self.col)}"
+
+
+@dataclass
+class TablePos:
+    """A laid-out table: data rows by key, columns by field."""
+
+    name: str
+    sheet: str
+    key: str
+    first_row: int
+    rows: dict[str, int] = field(default_factory=dict)
+    cols: dict[str, int] = field(default_factory=dict)
+
+    @property
+    def last_row(self) -> int:
+        return self.first_row + len(self.rows) - 1
+
+
+@dataclass
+class Registry:
+    entries: dict[str, Entry] = field(default_factory=dict)
+    tables: dict[str, TablePos] = field(default_factory=dict)
+    names: dict[str, str] = field(default_factory=dict)  # defined name -> quantity id
+
+    def add(self, entry: Entry) -> None:
+        if entry.id in self.entries:
+            raise ValueError(f"quantity id registered twice: {entry.id}")
+        if entry.name is not None:
+            if entry.name in self.names:
+                raise ValueError(f"defined name registered twice: {entry.name}")
+            self.names[entry.name] = entry.id
+        self.entries[entry.id] = entry
+
+    def add_table(self, table: TablePos) -> None:
+        if table.name in self.tables:
+            raise ValueError(f"table name laid out twice: {table.name}")
+        self.tables[table.name] = table
+
+    def inputs(self) -> list[Entry]:
+        return [e for e in self.entries.values() if e.kind == "input"]
+
+    def calcs(self) -> list[Entry]:
+        return [e for e in self.entries.values() if e.kind == "calc"]
