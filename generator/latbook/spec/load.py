@@ -12,7 +12,8 @@ from latbook.problems import Problem, SpecError, json_path
 from latbook.spec.models import Spec
 from latbook.spec.rules import check_rules
 
-_TAGGED_UNION_MEMBERS = {"site_class", "direct"}
+# pydantic puts the tag of a discriminated union into the location; a JSON path has none.
+_UNION_TAGS = {"ground_motion": {"site_class", "direct"}}
 
 
 def load_spec(path: Path) -> Spec:
@@ -51,7 +52,12 @@ def parse_spec(data: Any) -> Spec:
 
 
 def _problem_from_pydantic(err: dict[str, Any]) -> Problem:
-    loc = [part for part in err["loc"] if part not in _TAGGED_UNION_MEMBERS]
+    raw = list(err["loc"])
+    loc = [
+        part
+        for i, part in enumerate(raw)
+        if not (i and part in _UNION_TAGS.get(str(raw[i - 1]), ()))
+    ]
     message = err["msg"].removeprefix("Value error, ")
     kind = err["type"]
     if kind == "extra_forbidden":

@@ -1,0 +1,129 @@
+"""Bad input is refused with a message naming the JSON path and the rule, exit code 2,
+and no output written (an existing output left byte-for-byte untouched)."""
+
+from __future__ import annotations
+
+import copy
+import json
+import subprocess
+import sys
+from pathlib import Path
+
+import pytest
+
+from latbook.cli import main
+
+DEMO = Path(__file__).resolve().parents[1] / "out_examples" / "maple_terrace" / "spec.json"
+SENTINEL = b"previous workbook bytes"
+
+
+def demo() -> dict:
+    return json.loads(DEMO.read_text(encoding="utf-8"))
+
+
+def _set(data: dict, path: str, value) -> dict:
+    data = copy.deepcopy(data)
+    node = data
+    parts = path.split(".")
+    for part in parts[:-1]:
+        node = node[int(part)] if isinstance(node, list) else node[part]
+    last = parts[-1]
+    if value is _DELETE:
+        del node[last]
+    elif isinstance(node, list):
+        node[int(last)] = value
+    else:
+        node[last] = value
+    return data
+
+
+_DELETE = object()
+
+CASES = [
+    # (mutation path, new value, expected JSON path in the message, expected rule)
+    ("building.levels.0.elevation_ft", -3.0, "$.building.levels[0].elevation_ft", "greater_than"),
+    ("building.levels.0.elevation_ft", 0.0, "$.building.levels[0].elevation_ft", "greater_than"),
+    ("building.levels.1.elevation_ft", 5.0, "$.building.levels[1].elevation_ft", "elevation_order"),
+    ("building.levels.0.seismic_weight_kip", "heavy", "$.building.levels[0].seismic_weight_kip",
+     "float_parsing"),
+    ("seismic.ground_motion.site_class", "Q", "$.seismic.ground_motion.site_class",
+     "literal_error"),
+    ("design_method", "WSD", "$.design_method", "literal_error"),
+    ("seismic.system.R", 0.5, "$.seismic.system.R", "greater_than_equal"),
+    ("seismic.rho", 1.1, "$.seismic.rho", "literal_error"),
+    ("project.name", _DELETE, "$.project.name", "missing"),
+    ("building.levels.0.colour", "red", "$.building.levels[0].colour", "extra_forbidden"),
+]
+
+
+def run_build(spec_data, tmp_path: Path, capsys) -> tuple[int, str, Path]:
+    spec = tmp_path / "spec.json"
+    spec.write_text(json.dumps(spec_data), encoding="utf-8")
+    out = tmp_path / "calc.xlsx"
+    out.write_bytes(SENTINEL)
+    code = main(["build", str(spec), "-o", str(out)])
+    return code, capsys.readouterr().err, out
+
+
+@pytest.mark.parametrize("path,value,where,rule", CASES)
+def test_refused_with_path_and_rule(path, value, where, rule, tmp_path, capsys):
+    code, err, out = run_build(_set(demo(), path, value), tmp_path, capsys)
+    assert code == 2
+    assert where in err
+    assert f"[{rule}]" in err
+    assert "Traceback" not in err
+    assert out.read_bytes() == SENTINEL
+
+
+def test_site_specific_study_refused(tmp_path, capsys):
+    # ASCE 7-16 Table 11.4-1: site class E with Ss >= 1.0 says "See Section 11.4.8" (from memory).
+    data = _set(_set(demo(), "seismic.ground_motion.site_class", "E"),
+                "seismic.ground_motion.Ss_g", 1.2)
+    code, err, out = run_build(data, tmp_path, capsys)
+    assert code == 2
+    assert "$.seismic.ground_motion.Ss_g" in err and "11.4.8" in err
+    assert out.read_bytes() == SENTINEL
+
+
+def test_every_problem_listed_at_once(tmp_path, capsys):
+    data = _set(_set(demo(), "design_method", "WSD"), "seismic.system.Cd", 99)
+    code, err, _ = run_build(data, tmp_path, capsys)
+    assert code == 2
+    assert "$.design_method" in err and "$.seismic.system.Cd" in err
+
+
+def test_bad_json_names_line(tmp_path, capsys):
+    spec = tmp_path / "spec.json"
+    spec.write_text('{"project": {"name": "x",}}', encoding="utf-8")
+    out = tmp_path / "calc.xlsx"
+    assert main(["build", str(spec), "-o", str(out)]) == 2
+    err = capsys.readouterr().err
+    assert "$: not valid JSON" in err and "line 1" in err
+    assert not out.exists()
+
+
+def test_missing_file(tmp_path, capsys):
+    assert main(["validate", str(tmp_path / "nope.json")]) == 2
+    assert "cannot read" in capsys.readouterr().err
+
+
+def test_validate_ok_and_results_json(capsys):
+    assert main(["validate", str(DEMO)]) == 0
+    assert main(["results", str(DEMO), "--json"]) == 0
+    out = capsys.readouterr().out
+    results = json.loads(out[out.index("{"):])
+    assert results["seismic.V"] == pytest.approx(results["seismic.Cs"] * results["seismic.W"])
+
+
+def test_python_dash_m_and_schema(tmp_path):
+    proc = subprocess.run([sys.executable, "-m", "latbook", "schema"], capture_output=True,
+                          text=True, check=False)
+    assert proc.returncode == 0
+    assert json.loads(proc.stdout)["title"] == "Spec"
+
+
+def test_build_prints_caution(tmp_path, capsys):
+    out = tmp_path / "demo.xlsx"
+    assert main(["build", str(DEMO), "-o", str(out)]) == 0
+    assert "licensed engineer" in capsys.readouterr().out
+    assert out.stat().st_size > 10_000

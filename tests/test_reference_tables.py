@@ -1,0 +1,65 @@
+"""The workbook's own copy of the standards' tables (templates_src/tables) equals the
+engine's copy in code. Both were typed independently from ASCE 7-16 (from memory); the
+engine's copies are checked against the published tables in tests/engine/."""
+
+from __future__ import annotations
+
+import pytest
+
+from latbook.engine.asce7_16 import elf, importance, sdc, site
+from latbook.workbook.templates import reference_tables
+
+TABLES = reference_tables()
+
+
+@pytest.mark.parametrize("site_class", ["A", "B", "C", "D", "E"])
+def test_fa_rows(site_class):
+    t = TABLES["Fa"]
+    assert t["columns"] == list(site.TABLE_11_4_1_SS_G)
+    row = t["values"][t["rows"].index(site_class)]
+    for ss, value in zip(t["columns"], row, strict=True):
+        assert value == pytest.approx(_engine_fa(site_class, ss), abs=1e-12)
+
+
+def _engine_fa(site_class: str, ss: float) -> float:
+    """Engine Fa; where §11.4.8 refuses (site E, Ss >= 1.0) both copies hold the last value."""
+    return site.Fa(site_class, 0.99 if site_class == "E" and ss >= 1.0 else ss)
+
+
+@pytest.mark.parametrize("site_class", ["A", "B", "C", "D", "E"])
+def test_fv_rows(site_class):
+    t = TABLES["Fv"]
+    assert t["columns"] == list(site.TABLE_11_4_2_S1_G)
+    printed = site.TABLE_11_4_2_FV[site_class]
+    row = t["values"][t["rows"].index(site_class)]
+    for printed_value, value in zip(printed, row, strict=True):
+        if printed_value is not None:
+            assert value == pytest.approx(printed_value, abs=1e-12)
+
+
+def test_importance_factors():
+    t = TABLES["Ie"]
+    for rc, (value,) in zip(t["rows"], t["values"], strict=True):
+        assert value == importance.Ie_seismic(rc)
+
+
+def test_period_parameters():
+    t = TABLES["Ct_x"]
+    for key, (ct, x) in zip(t["rows"], t["values"], strict=True):
+        assert (ct, x) == elf.STRUCTURE_TYPES[key][:2]
+
+
+def test_cu_breakpoints():
+    t = TABLES["Cu"]
+    for sd1, (cu,) in zip(t["rows"], t["values"], strict=True):
+        assert cu == pytest.approx(elf.Cu(sd1), abs=1e-12)
+
+
+@pytest.mark.parametrize("name,func", [("SDC_short", sdc.sdc_short_period),
+                                       ("SDC_long", sdc.sdc_one_second)])
+def test_sdc_rows(name, func):
+    t = TABLES[name]
+    for bound, (low_rc, rc_iv) in zip(t["rows"], t["values"], strict=True):
+        probe = bound + 1e-6
+        assert func(probe, "II") == low_rc
+        assert func(probe, "IV") == rc_iv
