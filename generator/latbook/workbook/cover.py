@@ -37,16 +37,23 @@ def write_cover(ws: Worksheet, spec: Spec, spec_sha256: str, styles: Styles) -> 
     ]
     row = 2
     for label, value in rows:
+        ws.set_row(row, _height_for(value, chars_per_line=95))
         ws.write_string(row, 0, label, styles.get("cover_label"))
         ws.write_string(row, 1, value, styles.get("cover_value"))
         row += 1
     row += 1
     ws.write_string(row, 0, "Cautions", styles.get("cover_label"))
     for line in CAUTION_LINES:
-        ws.set_row(row, 30)
+        ws.set_row(row, _height_for(line, chars_per_line=80) + 4)
         ws.write_string(row, 1, line, styles.get("cover_warning"))
         row += 1
     return row
+
+
+def _height_for(text: str, chars_per_line: int) -> float:
+    """Row height in points that shows `text` wrapped in the 80-character value column."""
+    lines = max(1, -(-len(text) // chars_per_line))
+    return 13.0 * lines
 
 
 def _procedures(spec: Spec) -> str:

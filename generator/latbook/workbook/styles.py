@@ -23,8 +23,8 @@ _BASE: dict[str, dict[str, Any]] = {
     "text": {},
     # Inputs: unlocked, pale green fill with a dashed border; calculations stay locked.
     "input": {"locked": False, "bg_color": "#e3f1e0", "border": 3, "border_color": "#4f7f4a"},
-    "calc": {},
-    "result": {"bold": True, "top": 1, "bottom": 1},
+    "calc": {"align": "right"},
+    "result": {"bold": True, "top": 1, "bottom": 1, "align": "right"},
     "th": {"bold": True, "text_wrap": True, "align": "center", "valign": "bottom", "top": 1},
     "th_unit": {"font_size": 8, "align": "center"},
     "th_clause": {
