@@ -5,6 +5,7 @@ from __future__ import annotations
 import os
 
 import pytest
+
 from latbook.recalc import find_soffice
 
 

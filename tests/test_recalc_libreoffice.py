@@ -17,6 +17,7 @@ from pathlib import Path
 
 import pytest
 import xlsxwriter
+
 from latbook.recalc import (
     RecalcError,
     convert_to_pdf,
@@ -31,7 +32,6 @@ from latbook.workbook_functions import (
     disallowed_functions,
     functions_used,
 )
-
 from tests.helpers.evaluator import EXCEL_ERROR_TEXTS, evaluate_workbook
 
 INPUTS_SHEET = "Seismic inputs"

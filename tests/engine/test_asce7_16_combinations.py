@@ -8,6 +8,7 @@ All typed from memory; the expected factors below are that text with Ev substitu
 """
 
 import pytest
+
 from latbook.engine.asce7_16 import combinations as combos
 
 SDS_G = 1.0

@@ -5,6 +5,7 @@ test_asce7_16_elf.py (not a published example).
 """
 
 import pytest
+
 from latbook.engine.asce7_16.diaphragm_force import Fpx, Fpx_eq_12_10_1, Fpx_max, Fpx_min
 
 

@@ -4,6 +4,7 @@ Table 12.12-1 coefficients are from memory of ASCE 7-16.
 """
 
 import pytest
+
 from latbook.engine.asce7_16.drift import (
     ALLOWABLE_DRIFT,
     WIND_DRIFT_RATIO_COMMON_PRACTICE,

@@ -7,6 +7,7 @@ the end is derived by hand from the equations.
 """
 
 import pytest
+
 from latbook.engine.asce7_16 import elf
 
 # ---------------------------------------------------------------- Table 12.8-2 and Eq. 12.8-7

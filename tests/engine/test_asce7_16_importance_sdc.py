@@ -4,6 +4,7 @@ Table values typed from memory (ASCE 7-16 Table 1.5-2, Tables 11.6-1 and 11.6-2)
 """
 
 import pytest
+
 from latbook.engine.asce7_16.importance import Ie_seismic
 from latbook.engine.asce7_16.sdc import (
     sdc_one_second,

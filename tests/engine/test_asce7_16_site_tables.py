@@ -6,6 +6,7 @@ interpolation the tables' footnotes prescribe.
 """
 
 import pytest
+
 from latbook.engine.asce7_16 import site
 from latbook.engine.errors import CodeLimitError
 

@@ -8,6 +8,7 @@ the arithmetic written out beside them.
 """
 
 import pytest
+
 from latbook.engine.asce7_16 import wind
 
 # ASCE 7-16 Table 26.10-1, exposures B, C, D (from memory). The table's two-decimal entries

@@ -11,6 +11,7 @@ The geometry is read from those equations.
 """
 
 import pytest
+
 from latbook.engine.collector import (
     collector_breakpoints,
     collector_force_at_lb,

@@ -7,6 +7,7 @@ forces at a transfer diaphragm (Fig. 4.2: R = 15,000 lb, w = 200 plf, chord dept
 """
 
 import pytest
+
 from latbook.engine.diaphragm_tributary import (
     Span,
     chord_force_lb,

@@ -5,6 +5,7 @@ of the SDPWS nominal seismic value for the same construction (values from memory
 """
 
 import pytest
+
 from latbook.engine.sdpws.capacity import (
     ASD_REDUCTION,
     LRFD_PHI,

@@ -8,6 +8,7 @@ Deflection Formula" (Feb. 2007): P = v b, I = 2 A (b/2)^2, delta = P h^3 / (3 E 
 """
 
 import pytest
+
 from latbook.engine.errors import CodeLimitError
 from latbook.engine.sdpws.shear_wall import (
     ASPECT_RATIO_LIMIT_WSP,
