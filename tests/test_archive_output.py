@@ -1,0 +1,136 @@
+"""Archive-grade output: reproducible bytes, the spec embedded and shown, protection without
+a password, print setup on every sheet, and a printout by LibreOffice Calc 7.4 (an
+independent spreadsheet program) that holds every sheet. Demo data is invented.
+"""
+
+from __future__ import annotations
+
+import hashlib
+import json
+import shutil
+import subprocess
+import time
+from pathlib import Path
+
+import openpyxl
+import pytest
+
+from latbook import __version__
+from latbook.build import build_workbook, spec_digest
+from latbook.cli import main
+from latbook.recalc import convert_to_pdf, pdf_page_count
+from latbook.workbook.builder import SPEC_SHEET
+
+DEMO = Path(__file__).resolve().parents[1] / "out_examples/maple_terrace/spec.json"
+
+
+def _demo_data() -> dict:
+    return json.loads(DEMO.read_text(encoding="utf-8"))
+
+
+@pytest.fixture(scope="module")
+def demo(tmp_path_factory):
+    return build_workbook(_demo_data(), tmp_path_factory.mktemp("archive") / "demo.xlsx")
+
+
+@pytest.fixture(scope="module")
+def book(demo):
+    wb = openpyxl.load_workbook(demo.path)
+    yield wb
+    wb.close()
+
+
+def _printed_sheets(book) -> list:
+    return [ws for ws in book.worksheets if ws.sheet_state == "visible"]
+
+
+def test_two_builds_are_byte_identical(demo, tmp_path):
+    # zip entry times have 2 s resolution: wait past one so a clock-dependent stamp shows
+    time.sleep(2.1)
+    again = build_workbook(_demo_data(), tmp_path / "elsewhere.xlsx")
+    digest = [hashlib.sha256(p.read_bytes()).hexdigest() for p in (demo.path, again.path)]
+    assert digest[0] == digest[1]
+
+
+def test_spec_version_and_digest_are_embedded_and_shown(demo, book):
+    text, sha = spec_digest(_demo_data())
+    data = book[SPEC_SHEET]
+    assert data.sheet_state == "hidden"
+    assert data.protection.sheet is True
+    chunks = int(data["B3"].value)
+    assert "".join(data.cell(4 + i, 2).value for i in range(chunks)) == text
+    props = {p.name: p.value for p in book.custom_doc_props.props}
+    assert props == {"latbook_version": __version__, "latbook_spec_sha256": sha}
+    cover = [c.value for row in book["Cover"].iter_rows() for c in row]
+    assert sha in cover and f"latbook {__version__}" in cover
+
+
+def test_sheets_protected_without_password_formulas_locked_inputs_unlocked(demo, book):
+    for ws in book.worksheets:
+        assert ws.protection.sheet is True, ws.title
+        assert not ws.protection.password, ws.title
+    for e in demo.registry.entries.values():
+        cell = book[e.sheet].cell(e.row + 1, e.col + 1)
+        assert cell.protection.locked is (e.kind == "calc"), e.address
+
+
+def test_no_protect_option_leaves_sheets_unprotected(tmp_path):
+    out = tmp_path / "open.xlsx"
+    assert main(["build", str(DEMO), "-o", str(out), "--no-protect"]) == 0
+    wb = openpyxl.load_workbook(out)
+    try:
+        visible = [ws for ws in wb.worksheets if ws.title != SPEC_SHEET]
+        assert [ws.title for ws in visible if ws.protection.sheet] == []
+        assert wb[SPEC_SHEET].protection.sheet is True  # the record of the build stays locked
+    finally:
+        wb.close()
+
+
+def test_print_setup_on_every_sheet(demo, book):
+    project = _demo_data()["project"]
+    for ws in _printed_sheets(book):
+        assert ws.print_area, ws.title
+        assert ws.sheet_properties.pageSetUpPr.fitToPage is True, ws.title
+        # fitToWidth left out of the file means 1 (ECMA-376 Part 1, §18.3.1.63 default)
+        fit = (ws.page_setup.fitToWidth or 1, ws.page_setup.fitToHeight)
+        assert fit == (1, 0), ws.title
+        assert ws.page_setup.orientation in ("portrait", "landscape"), ws.title
+        header = ws.oddHeader
+        assert project["name"] in header.left.text, ws.title
+        assert header.center.text == "&A", ws.title
+        assert project["revision"] in header.right.text and project["date"] in header.right.text
+        assert "Page &P of &N" in ws.oddFooter.center.text, ws.title
+    tables = {t.sheet for t in demo.registry.tables.values()}
+    for name in tables:
+        assert book[name].print_title_rows, f"{name}: no repeated header rows"
+
+
+@pytest.fixture(scope="session")
+def pdftotext() -> str:
+    path = shutil.which("pdftotext")
+    if path is None:
+        import os
+
+        if os.environ.get("CI") == "true":
+            pytest.fail("pdftotext (poppler-utils) not installed -- CI must run the PDF test")
+        pytest.skip("pdftotext (poppler-utils) not installed")
+    return path
+
+
+@pytest.mark.libreoffice
+def test_pdf_printout_holds_every_sheet(demo, book, soffice, pdftotext, tmp_path):
+    pdf = convert_to_pdf(demo.path, tmp_path)
+    sheets = _printed_sheets(book)
+    pages = pdf_page_count(pdf)
+    # sane: at least a page per sheet, and no runaway (fit to width keeps tables narrow)
+    assert len(sheets) <= pages <= 4 * len(sheets) + 10
+    text = subprocess.run(
+        [pdftotext, "-layout", str(pdf), "-"], capture_output=True, text=True, check=True
+    ).stdout
+    flat = " ".join(text.split())
+    for ws in sheets:
+        title = str(ws["A1"].value)
+        assert " ".join(title.split()) in flat, f"sheet {ws.title}: title not printed"
+    # LibreOffice numbers the whole printout: the footer of the last page says so
+    assert f"Page {pages} of {pages}" in flat
+    assert SPEC_SHEET not in flat
