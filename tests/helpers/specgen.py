@@ -1,0 +1,389 @@
+"""Random valid latbook specs, for property-based tests and the scale benchmark.
+
+`make_spec(rng, n_levels, n_lines_per_dir, ...)` returns plain JSON data (a dict) that
+passes `latbook.spec.load.parse_spec`: every pydantic field rule of spec/models.py and
+every cross-field rule of spec/rules.py. The hypothesis strategy `specs()` draws the
+options and a seed, so a failing example shrinks to few levels and lines.
+
+What a generated building looks like (invented data, for tests and demos only):
+- one rectangular plan shared by every level, at a random origin;
+- levels listed bottom-up or top-down, elevations strictly following the order;
+- every level has a diaphragm assembly; several shear-wall assemblies;
+- per direction `n_lines_per_dir` wall lines at distinct positions inside the plan; the
+  first two run the full height (so every level has two lines each way), the others stop
+  at a random level and are continuous from there down to the base;
+- per line 1-4 segments stacked at the same places in every story, 0-3 openings per
+  story in the gaps between them.
+"""
+
+from __future__ import annotations
+
+import random
+import string
+from typing import Any
+
+from hypothesis import strategies as st
+
+from latbook.spec.models import MAX_LEVELS, MAX_WALL_LINES
+
+MAX_LINES_PER_DIR = MAX_WALL_LINES // 2
+SITE_CLASSES = ("A", "B", "C", "D", "E")
+STORY_HEIGHT_RANGE_FT = (8.0, 14.0)
+PLAN_SIDE_RANGE_FT = (30.0, 240.0)
+MAX_SEGMENTS_PER_LINE = 4
+MAX_OPENINGS_PER_STORY = 3
+ID_LENGTH_MAX = 12  # spec Identifier max_length
+# Segment aspect ratio h/b <= 3.5 at the tallest story (AWC SDPWS-2015 Table 4.3.4).
+MIN_SEGMENT_FT = STORY_HEIGHT_RANGE_FT[1] / 3.5
+
+
+def make_spec(
+    rng: random.Random,
+    n_levels: int,
+    n_lines_per_dir: int,
+    *,
+    design_method: str | None = None,
+    seismic: str | None = "random",
+    wind: bool | None = None,
+    level_order: str | None = None,
+    long_ids: bool = False,
+    text: str | None = None,
+) -> dict[str, Any]:
+    """A valid spec as JSON data.
+
+    seismic: "site_class", "direct", None (no seismic block) or "random".
+    wind: True / False / None (random; forced on when seismic is None).
+    long_ids: every id 12 characters (the Identifier maximum), to stress sheet names.
+    text: when given, every free-text field of the project holds it.
+    """
+    if not 1 <= n_levels <= MAX_LEVELS:
+        raise ValueError(f"n_levels must be 1..{MAX_LEVELS}")
+    if not 2 <= n_lines_per_dir <= MAX_LINES_PER_DIR:
+        raise ValueError(f"n_lines_per_dir must be 2..{MAX_LINES_PER_DIR}")
+    if seismic == "random":
+        seismic = rng.choice(("site_class", "direct", None))
+    if wind is None:
+        wind = rng.random() < 0.6
+    if seismic is None:
+        wind = True
+    ids = _IdMaker(rng, long_ids)
+
+    plan = _plan(rng)
+    levels = _levels(rng, n_levels, plan, ids)
+    order = level_order or rng.choice(("bottom_up", "top_down"))
+    assemblies = _assemblies(rng, ids)
+    dia_ids = [a["id"] for a in assemblies["diaphragms"]]
+    for level in levels:
+        level["diaphragm_assembly"] = rng.choice(dia_ids)
+    wall_ids = [a["id"] for a in assemblies["shear_walls"]]
+    lines = [
+        line
+        for direction in ("x", "y")
+        for line in _wall_lines(rng, direction, n_lines_per_dir, levels, plan, wall_ids, ids)
+    ]
+    top_ft = levels[-1]["elevation_ft"]
+
+    spec: dict[str, Any] = {
+        "project": _project(rng, text),
+        "design_method": design_method or rng.choice(("ASD", "LRFD")),
+        "building": {
+            "level_order": order,
+            "risk_category": rng.choice(("I", "II", "III", "IV")),
+            "levels": levels if order == "bottom_up" else levels[::-1],
+        },
+        "assemblies": assemblies,
+        "wall_lines": lines,
+        "drift": {
+            "seismic_row": rng.choice(
+                ("four_story_drift_tolerant", "masonry_cantilever", "other_masonry", "all_other")
+            ),
+            "wind_ratio": rng.choice((240, 360, 400, 500, 600)),
+        },
+    }
+    if seismic is not None:
+        spec["seismic"] = _seismic(rng, seismic)
+    if wind:
+        spec["wind"] = _wind(rng, top_ft)
+    return spec
+
+
+# --- ids -----------------------------------------------------------------------------------
+
+
+class _IdMaker:
+    """Unique spec Identifiers; with `long_ids` every one is exactly 12 characters."""
+
+    _TAIL = string.ascii_letters + string.digits + "_-"
+
+    def __init__(self, rng: random.Random, long_ids: bool):
+        self._rng = rng
+        self._long = long_ids
+        self._used: set[str] = set()
+
+    def make(self, prefix: str, n: int) -> str:
+        base = f"{prefix}{n}"
+        if not self._long:
+            return base
+        while True:
+            pad = "".join(self._rng.choice(self._TAIL) for _ in range(ID_LENGTH_MAX))
+            candidate = (base + pad)[:ID_LENGTH_MAX]
+            if candidate not in self._used:
+                self._used.add(candidate)
+                return candidate
+
+
+# --- building ------------------------------------------------------------------------------
+
+
+def _r(x: float, digits: int = 2) -> float:
+    return round(x, digits)
+
+
+def _plan(rng: random.Random) -> dict[str, float]:
+    x0 = _r(rng.choice((0.0, rng.uniform(-200, 200))), 1)
+    y0 = _r(rng.choice((0.0, rng.uniform(-200, 200))), 1)
+    return {
+        "x_min_ft": x0,
+        "x_max_ft": _r(x0 + rng.uniform(*PLAN_SIDE_RANGE_FT), 1),
+        "y_min_ft": y0,
+        "y_max_ft": _r(y0 + rng.uniform(*PLAN_SIDE_RANGE_FT), 1),
+    }
+
+
+def _levels(rng, n_levels, plan, ids: _IdMaker) -> list[dict[str, Any]]:
+    """Levels bottom-up, elevations strictly increasing."""
+    levels = []
+    elevation_ft = 0.0
+    for i in range(n_levels):
+        elevation_ft = _r(elevation_ft + rng.uniform(*STORY_HEIGHT_RANGE_FT))
+        level = {
+            "id": ids.make("RF" if i == n_levels - 1 else "L", i + 2),
+            "elevation_ft": elevation_ft,
+            "seismic_weight_kip": _r(rng.uniform(20, 900), 1),
+            "plan": dict(plan),
+        }
+        if rng.random() < 0.5:
+            level["name"] = f"Level {i + 2}"
+        levels.append(level)
+    return levels
+
+
+def _assemblies(rng, ids: _IdMaker) -> dict[str, list[dict[str, Any]]]:
+    diaphragms = []
+    for i in range(rng.randint(1, 3)):
+        vs = _r(rng.uniform(200, 1500), 0)
+        diaphragms.append(
+            {
+                "id": ids.make("D", i + 1),
+                "description": f"invented diaphragm assembly {i + 1}",
+                "vs_nominal_plf": vs,
+                "vw_nominal_plf": _r(vs * 1.4, 0),
+            }
+        )
+        if rng.random() < 0.5:
+            diaphragms[-1]["chord_capacity_lb"] = _r(rng.uniform(4000, 40000), 0)
+            diaphragms[-1]["collector_capacity_lb"] = _r(rng.uniform(4000, 40000), 0)
+    walls = []
+    for i in range(rng.randint(1, 4)):
+        vs = _r(rng.uniform(300, 2500), 0)
+        wall = {
+            "id": ids.make("SW", i + 1),
+            "description": f"invented shear-wall assembly {i + 1}",
+            "vs_nominal_plf": vs,
+            "vw_nominal_plf": _r(vs * 1.4, 0),
+            "Ga_seismic_kips_per_in": _r(rng.uniform(8, 40), 1),
+            "end_post_E_psi": rng.choice((1.2e6, 1.4e6, 1.6e6)),
+            "end_post_A_in2": rng.choice((12.25, 16.5, 30.25, 49.5)),
+            "hold_down_delta_in": _r(rng.uniform(0.05, 0.25), 3),
+        }
+        if rng.random() < 0.5:
+            wall["Ga_wind_kips_per_in"] = _r(rng.uniform(8, 40), 1)
+        walls.append(wall)
+    return {"diaphragms": diaphragms, "shear_walls": walls}
+
+
+def _wall_lines(rng, direction, n_lines, levels, plan, wall_ids, ids: _IdMaker) -> list[dict]:
+    """`n_lines` lines of one direction at distinct positions, continuous to the base."""
+    lo, hi = (
+        (plan["y_min_ft"], plan["y_max_ft"])
+        if direction == "x"
+        else (plan["x_min_ft"], plan["x_max_ft"])
+    )
+    along_ft = (
+        plan["x_max_ft"] - plan["x_min_ft"]
+        if direction == "x"
+        else plan["y_max_ft"] - plan["y_min_ft"]
+    )
+    step = (hi - lo) / (n_lines - 1)
+    positions = [_r(lo + i * step, 3) for i in range(n_lines)]
+    positions[-1] = hi  # exactly on the plan edge, not past it by rounding
+    prefix = "X" if direction == "x" else "Y"
+    lines = []
+    for i, position_ft in enumerate(positions):
+        top = len(levels) - 1 if i < 2 else rng.randrange(len(levels))
+        story_levels = [levels[k] for k in range(top, -1, -1)]  # from the line's top down
+        lines.append(
+            {
+                "id": ids.make(prefix, i + 1),
+                "direction": direction,
+                "position_ft": position_ft,
+                "stories": _stories(rng, story_levels, along_ft, wall_ids, ids),
+            }
+        )
+    return lines
+
+
+def _stories(rng, story_levels, along_ft, wall_ids, ids: _IdMaker) -> list[dict[str, Any]]:
+    """Stories top-down; the same segment places in every story, openings in the gaps."""
+    # Each segment or gap takes one slot; a segment fills 45-70 % of its slot, so a slot
+    # must be long enough for the shortest segment allowed.
+    max_slots = max(1, int(along_ft * 0.45 / MIN_SEGMENT_FT))
+    n_seg = rng.randint(1, min(MAX_SEGMENTS_PER_LINE, max_slots))
+    n_gap = rng.randint(0, min(MAX_OPENINGS_PER_STORY, max_slots - n_seg))
+    n_slot = n_seg + n_gap
+    slot_ft = along_ft / n_slot
+    kinds = ["segment"] * n_seg + ["gap"] * n_gap
+    rng.shuffle(kinds)
+    margin_ft = 0.05 * slot_ft
+    places = []
+    for k, kind in enumerate(kinds):
+        start = k * slot_ft + margin_ft + rng.uniform(0, 0.2) * slot_ft
+        length = rng.uniform(0.45, 0.7) * slot_ft
+        places.append((kind, _r(start, 3), _r(length, 3)))
+    seg_ids = [ids.make("S", n + 1) for n in range(n_seg)]
+    stories = []
+    for depth, level in enumerate(story_levels):
+        has_story_below = depth + 1 < len(story_levels)
+        segments = []
+        openings = []
+        for kind, start, length in places:
+            if kind == "segment":
+                segments.append(
+                    _segment(rng, seg_ids[len(segments)], start, length, wall_ids, has_story_below)
+                )
+            elif rng.random() < 0.4:
+                opening = {"start_ft": start, "length_ft": length}
+                if rng.random() < 0.5:
+                    opening["label"] = rng.choice(("window", "door", "storefront"))
+                openings.append(opening)
+        story: dict[str, Any] = {"level": level["id"], "segments": segments}
+        if openings:
+            story["openings"] = openings
+        stories.append(story)
+    return stories
+
+
+def _segment(rng, seg_id, start_ft, length_ft, wall_ids, has_story_below) -> dict[str, Any]:
+    segment = {
+        "id": seg_id,
+        "start_ft": start_ft,
+        "length_ft": length_ft,
+        "assembly": rng.choice(wall_ids),
+        "dead_load_plf": _r(rng.uniform(0, 800), 0),
+        "hold_down_offset_ft": _r(min(rng.uniform(0.15, 0.5), 0.2 * length_ft), 3),
+        "hold_down_continues_below": has_story_below and rng.random() < 0.7,
+    }
+    if rng.random() < 0.2:
+        segment["point_load_start_lb"] = _r(rng.uniform(0, 5000), 0)
+        segment["point_load_end_lb"] = _r(rng.uniform(0, 5000), 0)
+    return segment
+
+
+# --- loads and project ---------------------------------------------------------------------
+
+
+def _seismic(rng, method: str) -> dict[str, Any]:
+    if method == "site_class":
+        site_class = rng.choice(SITE_CLASSES)
+        # ASCE 7-16 §11.4.8: the spec rules refuse D/E with S1 >= 0.2 g and E with Ss >= 1.0 g.
+        s1_max = 0.19 if site_class in ("D", "E") else 0.8
+        ss_max = 0.95 if site_class == "E" else 2.5
+        motion = {
+            "method": "site_class",
+            "Ss_g": _r(rng.uniform(0.05, ss_max), 3),
+            "S1_g": _r(rng.uniform(0.02, s1_max), 3),
+            "site_class": site_class,
+        }
+    else:
+        motion = {
+            "method": "direct",
+            "SDS_g": _r(rng.uniform(0.05, 2.0), 3),
+            "SD1_g": _r(rng.uniform(0.03, 1.2), 3),
+            "S1_g": _r(rng.uniform(0.0, 0.9), 3),
+        }
+    seismic: dict[str, Any] = {
+        "ground_motion": motion,
+        "system": {
+            "label": "Light-frame wood walls with wood structural panels (invented)",
+            "R": rng.choice((2.0, 6.5, 7.0)),
+            "Cd": rng.choice((2.0, 4.0)),
+            "Omega0": rng.choice((2.5, 3.0)),
+        },
+        "structure_type": rng.choice(
+            ("steel_moment_frame", "concrete_moment_frame", "steel_eccentric_braced_frame")
+            + ("all_other",) * 3
+        ),
+        "TL_s": rng.choice((4.0, 6.0, 8.0, 12.0)),
+        "rho": rng.choice((1.0, 1.3)),
+        "collector_light_frame_exception": rng.random() < 0.5,
+    }
+    if rng.random() < 0.25:
+        seismic["T_computed_s"] = _r(rng.uniform(0.05, 2.0), 3)
+    return seismic
+
+
+def _wind(rng, top_ft: float) -> dict[str, Any]:
+    return {
+        "V_mph": rng.choice((95, 105, 110, 115, 130, 150, 180)),
+        "exposure": rng.choice(("B", "C", "D")),
+        "Kzt": rng.choice((1.0, 1.0, 1.15)),
+        "Kd": 0.85,
+        "ground_elevation_ft": _r(rng.uniform(0, 6000), 0),
+        "use_Ke": rng.random() < 0.5,
+        "G": 0.85,
+        "enclosure": rng.choice(("enclosed", "partially_enclosed")),
+        "mean_roof_height_ft": _r(top_ft + rng.uniform(0, 4)),
+        "parapet_height_ft": rng.choice((0.0, 0.0, 2.5, 4.0)),
+    }
+
+
+def _project(rng, text: str | None) -> dict[str, str]:
+    project = {
+        "name": text or f"Generated building {rng.randrange(10**6):06d}",
+        "number": text or f"G-{rng.randrange(10**4):04d}",
+        "date": "2026-12-02",
+        "revision": text or rng.choice(("0", "A", "B")),
+    }
+    if text is not None:
+        for key in ("location", "client", "engineer", "checker", "notes"):
+            project[key] = text
+    return project
+
+
+# --- hypothesis ----------------------------------------------------------------------------
+
+
+@st.composite
+def specs(
+    draw,
+    min_levels: int = 1,
+    max_levels: int = MAX_LEVELS,
+    max_lines_per_dir: int = 30,
+    long_ids: bool | None = False,
+) -> dict[str, Any]:
+    """A hypothesis strategy of valid specs; options are drawn, so they shrink first."""
+    n_levels = draw(st.integers(min_levels, max_levels))
+    n_lines = draw(st.integers(2, min(max_lines_per_dir, MAX_LINES_PER_DIR)))
+    seismic = draw(st.sampled_from(("site_class", "direct", None)))
+    wind = True if seismic is None else draw(st.booleans())
+    seed = draw(st.integers(0, 2**32 - 1))
+    return make_spec(
+        random.Random(seed),
+        n_levels,
+        n_lines,
+        design_method=draw(st.sampled_from(("ASD", "LRFD"))),
+        seismic=seismic,
+        wind=wind,
+        level_order=draw(st.sampled_from(("bottom_up", "top_down"))),
+        long_ids=draw(st.booleans()) if long_ids is None else long_ids,
+    )
