@@ -7,13 +7,16 @@ from __future__ import annotations
 
 import hashlib
 import json
+import re
 import shutil
 import subprocess
 import time
+import zipfile
 from pathlib import Path
 
 import openpyxl
 import pytest
+from xlsxwriter.utility import xl_col_to_name
 
 from latbook import __version__
 from latbook.build import build_workbook, spec_digest
@@ -103,6 +106,32 @@ def test_print_setup_on_every_sheet(demo, book):
     tables = {t.sheet for t in demo.registry.tables.values()}
     for name in tables:
         assert book[name].print_title_rows, f"{name}: no repeated header rows"
+
+
+def _chart_value_refs(path: Path) -> set[str]:
+    with zipfile.ZipFile(path) as z:
+        xml = "".join(z.read(n).decode() for n in z.namelist() if n.startswith("xl/charts/"))
+    return set(re.findall(r"<c:val><c:numRef><c:f>([^<]+)</c:f>", xml))
+
+
+def _column_range(demo, table: str, field: str) -> str:
+    t = demo.registry.tables[table]
+    col = xl_col_to_name(t.cols[field])
+    return f"{t.sheet}!${col}${t.first_row + 1}:${col}${t.last_row + 1}"
+
+
+CHARTED = {"elf": ("Fx", "Vx"), "wind_x": ("F_level", "V_story"), "wind_y": ("F_level", "V_story")}
+
+
+def test_story_force_and_shear_charts_read_the_formula_cells(demo):
+    # the demo has seismic and wind: one chart per load source and direction
+    expected = {_column_range(demo, t, f) for t, fields in CHARTED.items() for f in fields}
+    assert expected <= _chart_value_refs(demo.path)
+    kind = {(e.sheet, e.row, e.col): e.kind for e in demo.registry.entries.values()}
+    for table, fields in CHARTED.items():
+        t = demo.registry.tables[table]
+        for field in fields:
+            assert {kind[(t.sheet, r, t.cols[field])] for r in t.rows.values()} == {"calc"}
 
 
 @pytest.fixture(scope="session")

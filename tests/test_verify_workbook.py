@@ -170,5 +170,8 @@ def test_inserted_row_is_a_layout_mismatch(demo, tmp_path):
 
 
 def test_normalized_ignores_spacing_and_case_outside_text():
-    assert normalized('=if(A1 = "x y", max( 1,2 ), 0)') == '=IF(A1="x y",MAX(1,2),0)'
+    assert normalized('=if(A1 = "x y", max( 1,2 ), 0)') == normalized('=IF(A1="x y",MAX(1,2),0)')
+    # LibreOffice saves 1E-9 as 0.000000001
+    assert normalized("=F55+1E-9*MAX(1,F55)") == normalized("=F55+0.000000001*MAX(1.0,F55)")
+    assert normalized("=F55+1E-9") != normalized("=F55+1E-8")
     assert normalized('=IF(A1="a",1,0)') != normalized('=IF(A1="A",1,0)')

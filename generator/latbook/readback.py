@@ -137,10 +137,10 @@ def _as_spec_value(raw: Any, built: Any) -> tuple[Any, str | None]:
             return raw, None
         if isinstance(raw, str) and raw.upper() in ("TRUE", "FALSE"):
             return raw.upper() == "TRUE", None
-        return None, f"expected TRUE or FALSE, the cell holds {raw!r}"
+        return None, f"expected TRUE or FALSE, the cell holds {_shown(raw)}"
     if isinstance(built, int | float):
         if isinstance(raw, bool) or not isinstance(raw, int | float):
-            return None, f"expected a number, the cell holds {raw!r}"
+            return None, f"expected a number, the cell holds {_shown(raw)}"
         if isinstance(built, int) and float(raw).is_integer():
             return int(raw), None
         return raw, None
@@ -149,6 +149,10 @@ def _as_spec_value(raw: Any, built: Any) -> tuple[Any, str | None]:
             return str(int(raw)), None
         return ("" if raw is None else str(raw)), None
     return raw, None
+
+
+def _shown(raw: Any) -> str:
+    return "nothing (blank)" if raw is None else repr(raw)
 
 
 def _same_input(built: Any, raw: Any) -> bool:

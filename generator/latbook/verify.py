@@ -45,6 +45,8 @@ FINDING_KINDS = {
 }
 
 _STRING_LITERAL = re.compile(r'"(?:[^"]|"")*"')
+# A number literal (not part of a name or a cell ref): LibreOffice writes 1E-9 as 0.000000001.
+_NUMBER = re.compile(r"(?<![\w.$])(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?(?![\w.(])")
 
 
 @dataclass(frozen=True)
@@ -168,6 +170,8 @@ def _input_findings(back: ReadBack) -> list[Finding]:
 
 def _range_finding(reading: InputReading) -> Finding | None:
     e, v = reading.entry, reading.cell_value
+    if v is None or v == "":
+        return None  # blank: allowed for an optional field, else the spec check reports it
     where = {"address": e.address, "quantity": e.id, "label": e.label}
     if e.choices is not None:
         if not any(_same_choice(c, v) for c in e.choices):
@@ -262,7 +266,8 @@ def _check_calcs(cells, values, spec, results, report: VerifyReport) -> None:
 
 def normalized(formula: str) -> str:
     """Formula text without the differences spreadsheet programs make when they save it:
-    spaces and letter case outside string literals, and the `_xlfn.` storage prefix."""
+    spaces, letter case and the spelling of numbers outside string literals, and the
+    `_xlfn.` storage prefix."""
     parts, last = [], 0
     for m in _STRING_LITERAL.finditer(formula):
         parts.append(_code(formula[last : m.start()]))
@@ -273,7 +278,8 @@ def normalized(formula: str) -> str:
 
 
 def _code(text: str) -> str:
-    return re.sub(r"\s+", "", text).upper().replace("_XLFN.", "")
+    text = _NUMBER.sub(lambda m: repr(float(m.group(0))), re.sub(r"\s+", "", text))
+    return text.upper().replace("_XLFN.", "")
 
 
 def same(expected: Any, got: Any) -> bool:
