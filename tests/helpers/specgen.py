@@ -111,7 +111,8 @@ def make_spec(
 
 
 class _IdMaker:
-    """Unique spec Identifiers; with `long_ids` every one is exactly 12 characters."""
+    """Unique spec Identifiers; with `long_ids` every one is exactly 12 characters and
+    holds a '-' (allowed in ids, but a sheet name with it must be quoted in formulas)."""
 
     _TAIL = string.ascii_letters + string.digits + "_-"
 
@@ -126,7 +127,7 @@ class _IdMaker:
             return base
         while True:
             pad = "".join(self._rng.choice(self._TAIL) for _ in range(ID_LENGTH_MAX))
-            candidate = (base + pad)[:ID_LENGTH_MAX]
+            candidate = (base + "-" + pad)[:ID_LENGTH_MAX]  # '-' needs quoting in sheet refs
             if candidate not in self._used:
                 self._used.add(candidate)
                 return candidate
