@@ -12,6 +12,7 @@ from collections.abc import Sequence
 from pathlib import Path
 
 from latbook import __version__
+from latbook.cli_workbook import WORKBOOK_COMMANDS, add_workbook_commands
 from latbook.problems import Problem, SpecError
 from latbook.workbook.cautions import CAUTION_SHORT
 
@@ -40,6 +41,7 @@ def _parser() -> argparse.ArgumentParser:
     r = sub.add_parser("results", help="the engine's quantities for a spec, by id")
     r.add_argument("spec", type=Path)
     r.add_argument("--json", action="store_true", help="JSON output (default: id = value)")
+    add_workbook_commands(sub)
     return p
 
 
@@ -69,7 +71,14 @@ def _cmd_build(args: argparse.Namespace) -> int:
         raise SpecError([Problem("-o", "output", "the output file must end in .xlsx")])
     if not out.parent.exists():
         raise SpecError([Problem("-o", "output", f"folder {out.parent} does not exist")])
-    result = build_workbook(load_json(args.spec), out, protect=not args.no_protect)
+    if out.is_dir():
+        raise SpecError([Problem("-o", "output", f"{out} is a folder, not a file")])
+    data = load_json(args.spec)
+    try:
+        result = build_workbook(data, out, protect=not args.no_protect)
+    except OSError as exc:
+        print(f"latbook: cannot write {out}: {exc.strerror or exc}", file=sys.stderr)
+        return EXIT_FAILED
     n_calc = len(result.registry.calcs())
     print(f"wrote {out} ({n_calc} calculated cells, spec SHA-256 {result.spec_sha256[:12]})")
     print(f"caution: {CAUTION_SHORT}")
@@ -109,6 +118,7 @@ COMMANDS = {
     "validate": _cmd_validate,
     "schema": _cmd_schema,
     "results": _cmd_results,
+    **WORKBOOK_COMMANDS,
 }
 
 if __name__ == "__main__":

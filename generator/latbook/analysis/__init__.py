@@ -8,13 +8,28 @@ from __future__ import annotations
 
 from typing import Any
 
+from latbook.analysis.combinations import combination_results
+from latbook.analysis.diaphragm import diaphragm_results
 from latbook.analysis.inputs import input_results
 from latbook.analysis.seismic import seismic_results
+from latbook.analysis.shear_walls import shear_wall_results
+from latbook.analysis.story_drift import drift_results
+from latbook.analysis.summary import summary_results
+from latbook.analysis.wind import wind_results
 from latbook.spec.models import Spec
 
 Results = dict[str, Any]
 
-STEPS = [input_results, seismic_results]
+STEPS = [
+    input_results,
+    seismic_results,
+    wind_results,
+    combination_results,
+    diaphragm_results,
+    shear_wall_results,
+    drift_results,
+    summary_results,
+]
 
 
 def compute_results(spec: Spec) -> Results:

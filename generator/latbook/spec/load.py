@@ -34,6 +34,9 @@ def load_json(path: Path) -> Any:
     except json.JSONDecodeError as exc:
         problem = Problem("$", "json", f"not valid JSON: {exc.msg} at line {exc.lineno}")
         raise SpecError([problem]) from None
+    except RecursionError:
+        problem = Problem("$", "json", "JSON nested too deeply to be a latbook spec")
+        raise SpecError([problem]) from None
     return data
 
 
@@ -42,7 +45,8 @@ def parse_spec(data: Any) -> Spec:
     if not isinstance(data, dict):
         raise SpecError([Problem("$", "type", "the spec must be a JSON object")])
     try:
-        spec = Spec.model_validate(data)
+        # strict: JSON types as written (no true -> 1.0, "10" -> 10.0, "yes" -> True)
+        spec = Spec.model_validate(data, strict=True)
     except ValidationError as exc:
         raise SpecError([_problem_from_pydantic(err) for err in exc.errors()]) from None
     problems = check_rules(spec)

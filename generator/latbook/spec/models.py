@@ -139,6 +139,12 @@ class Seismic(_Strict):
         None, description="Period from a substantiated analysis; capped at Cu Ta."
     )
     rho: Literal[1.0, 1.3] = Field(1.0, description="Redundancy factor, ASCE 7-16 §12.3.4.")
+    collector_light_frame_exception: bool = Field(
+        False,
+        description="True: the structure is braced entirely by light-frame shear walls and "
+        "collectors are designed without overstrength (ASCE 7-16 §12.10.2.1, Exception). "
+        "False: collectors in SDC C-F take the overstrength forces of §12.10.2.1.",
+    )
 
 
 class Wind(_Strict):
@@ -163,6 +169,16 @@ class DiaphragmAssembly(_Strict):
     description: Text = ""
     vs_nominal_plf: Annotated[float, Field(gt=0, le=10000)]
     vw_nominal_plf: Annotated[float, Field(gt=0, le=15000)]
+    chord_capacity_lb: Annotated[float, Field(gt=0, le=1.0e7)] | None = Field(
+        None,
+        description="Chord axial capacity at the design method's level (ASD allowable or "
+        "LRFD design strength), lb; optional, gives a chord demand/capacity ratio.",
+    )
+    collector_capacity_lb: Annotated[float, Field(gt=0, le=1.0e7)] | None = Field(
+        None,
+        description="Collector (drag strut) axial capacity at the design method's level, lb; "
+        "optional, gives a collector demand/capacity ratio.",
+    )
 
 
 class ShearWallAssembly(_Strict):

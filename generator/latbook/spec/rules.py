@@ -25,11 +25,15 @@ def _levels(spec: Spec) -> Iterator[Problem]:
     levels = spec.building.levels
     seen: set[str] = set()
     for i, level in enumerate(levels):
-        if level.id in seen:
+        # compared ignoring case: level ids name sheets (Dia_<level>_<dir>, Walls_<level>) and
+        # spreadsheet sheet names are unique ignoring case
+        if level.id.lower() in seen:
             yield Problem(
-                json_path(("building", "levels", i, "id")), "unique", "duplicate level id"
+                json_path(("building", "levels", i, "id")),
+                "unique",
+                "duplicate level id (level ids must differ by more than letter case)",
             )
-        seen.add(level.id)
+        seen.add(level.id.lower())
     increasing = spec.building.level_order == "bottom_up"
     for i in range(1, len(levels)):
         lower, upper = (levels[i - 1], levels[i]) if increasing else (levels[i], levels[i - 1])

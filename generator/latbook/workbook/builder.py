@@ -6,11 +6,13 @@ cached values come from the engine's results, keyed by quantity id.
 
 from __future__ import annotations
 
+import contextlib
 import datetime as dt
+import gc
 import json
 import os
 import tempfile
-from collections.abc import Mapping
+from collections.abc import Iterator, Mapping
 from pathlib import Path
 from typing import Any
 
@@ -22,10 +24,10 @@ from latbook.spec.models import Spec
 from latbook.workbook.cautions import CAUTION_SHORT
 from latbook.workbook.context import build_context
 from latbook.workbook.cover import COVER_SHEET, write_cover
-from latbook.workbook.formula import render
 from latbook.workbook.index_sheet import INDEX_SHEET, write_index
 from latbook.workbook.layout import COL_CLAUSE, Cell, SheetPlan, plan_sheets
 from latbook.workbook.registry import Registry
+from latbook.workbook.rendered import cell_formula
 from latbook.workbook.styles import Styles
 from latbook.workbook.tables_sheet import TABLES_SHEET, write_tables
 from latbook.workbook.templates import all_templates, reference_tables
@@ -35,6 +37,9 @@ SPEC_CHUNK = 30000
 FIXED_TIMESTAMP = dt.datetime(2000, 1, 1, 0, 0, 0)
 SCALAR_WIDTHS = {0: 46, 1: 10, 2: 14, 3: 10, 4: 34}
 TABLE_WIDTH = 12
+# in_memory: assemble the parts in memory, not in one temp file per part (faster, and
+# nothing to clean up if a build is interrupted).
+WORKBOOK_OPTIONS = {"strings_to_formulas": False, "strings_to_urls": False, "in_memory": True}
 
 
 class BuildError(RuntimeError):
@@ -58,6 +63,25 @@ def write_workbook(
     protect: bool = True,
 ) -> Registry:
     """Write the workbook for `spec` to `path` atomically; returns the registry."""
+    with _no_cyclic_gc():
+        return _write_workbook(spec, results, path, spec_json, spec_sha256, protect)
+
+
+@contextlib.contextmanager
+def _no_cyclic_gc() -> Iterator[None]:
+    """Pause the cyclic garbage collector: a build allocates ~10 objects per cell and frees
+    few until the end, so collection passes only add time that grows faster than the cells
+    (~17 % of a 12-level, 60-line build). Reference counting still frees memory."""
+    was_enabled = gc.isenabled()
+    gc.disable()
+    try:
+        yield
+    finally:
+        if was_enabled:
+            gc.enable()
+
+
+def _write_workbook(spec, results, path, spec_json, spec_sha256, protect) -> Registry:
     plans, registry = layout(spec)
     missing = [e.id for e in registry.calcs() if e.id not in results]
     if missing:
@@ -66,6 +90,7 @@ def write_workbook(
     fd, tmp = tempfile.mkstemp(prefix=f".{path.name}.", suffix=".tmp", dir=path.parent or ".")
     os.close(fd)
     try:
+        os.chmod(tmp, _new_file_mode())  # mkstemp makes 0600; a workbook is a shared document
         _write(spec, results, plans, registry, Path(tmp), spec_json, spec_sha256, protect)
         os.replace(tmp, path)
     except BaseException:
@@ -74,8 +99,15 @@ def write_workbook(
     return registry
 
 
+def _new_file_mode() -> int:
+    """0666 less the process umask: the mode open() would give a new file."""
+    umask = os.umask(0)
+    os.umask(umask)
+    return 0o666 & ~umask
+
+
 def _write(spec, results, plans, registry, tmp, spec_json, spec_sha256, protect) -> None:
-    wb = xlsxwriter.Workbook(str(tmp), {"strings_to_formulas": False, "strings_to_urls": False})
+    wb = xlsxwriter.Workbook(str(tmp), WORKBOOK_OPTIONS)
     wb.set_properties(
         {
             "title": f"Lateral calculation: {spec.project.name}",
@@ -99,6 +131,7 @@ def _write(spec, results, plans, registry, tmp, spec_json, spec_sha256, protect)
     for plan in plans:
         _write_plan(sheets[plan.name], plan, registry, results, styles)
         ws = sheets[plan.name]
+        _write_charts(wb, ws, plan, registry)
         for top, bottom in plan.header_rows[:1]:
             ws.repeat_rows(top, bottom)
         _finish_sheet(ws, header, plan.last_row, plan.last_col, protect, plan.template.landscape)
@@ -134,17 +167,39 @@ def _write_plan(ws: Worksheet, plan: SheetPlan, registry: Registry, results, sty
         _write_cell(ws, plan.name, cell, registry, tables, results, styles)
 
 
+def _write_charts(wb, ws: Worksheet, plan: SheetPlan, registry: Registry) -> None:
+    """Draw each chart block of `plan` (see layout._place_chart) from its table's columns."""
+    for spec in plan.charts:
+        tpos = registry.tables[spec["table"]]
+        if not tpos.rows or not spec["series"]:
+            continue
+        kind = {"type": spec["type"]}
+        if spec["type"] == "scatter":
+            kind["subtype"] = spec["subtype"]
+        chart = wb.add_chart(kind)
+        x_col = tpos.cols[spec["x"]]
+        for series in spec["series"]:
+            col = tpos.cols[series["field"]]
+            chart.add_series(
+                {
+                    "name": series["name"],
+                    "categories": [tpos.sheet, tpos.first_row, x_col, tpos.last_row, x_col],
+                    "values": [tpos.sheet, tpos.first_row, col, tpos.last_row, col],
+                }
+            )
+        if spec["title"]:
+            chart.set_title({"name": spec["title"], "name_font": {"size": 11}})
+        chart.set_x_axis({"name": spec["x_title"]})
+        chart.set_y_axis({"name": spec["y_title"], "major_gridlines": {"visible": True}})
+        chart.set_legend({"position": "bottom"})
+        chart.set_size({"width": 720, "height": 20 * spec["rows"]})
+        ws.insert_chart(spec["row"], 0, chart, {"object_position": 1})
+
+
 def _write_cell(ws, sheet, cell: Cell, registry, tables, results, styles) -> None:
     fmt = styles.get(cell.style, cell.fmt)
     if cell.formula is not None:
-        formula = render(
-            cell.formula,
-            registry=registry,
-            sheet=sheet,
-            ctx=cell.ctx,
-            table=tables.get(cell.table) if cell.table else None,
-            row=cell.row,
-        )
+        formula = cell_formula(cell, sheet, registry)
         ws.write_formula(cell.row, cell.col, formula, fmt, _cached(results[cell.qid]))
     elif cell.style == "input":
         _write_input(ws, cell, fmt)

@@ -9,7 +9,10 @@ from __future__ import annotations
 from dataclasses import dataclass, field
 from typing import Any
 
+from latbook.analysis.combinations import combination_uses
 from latbook.spec.models import Spec
+from latbook.workbook.diaphragm_context import diaphragm_collections, wall_input_collections
+from latbook.workbook.wall_collections import wall_collections
 
 
 @dataclass
@@ -74,4 +77,28 @@ def levels_collections(spec: Spec) -> dict[str, list[dict[str, Any]]]:
     return {"levels_top_down": rows}
 
 
-COLLECTION_BUILDERS = [levels_collections]
+def wind_collections(spec: Spec) -> dict[str, list[dict[str, Any]]]:
+    """Wind directions (one Wind_<dir> sheet each): the axis along and across the wind."""
+    if spec.wind is None:
+        return {}
+    return {
+        "wind_directions": [
+            {"dir": "x", "along": "x", "across": "y"},
+            {"dir": "y", "along": "y", "across": "x"},
+        ]
+    }
+
+
+def combination_use_collections(spec: Spec) -> dict[str, list[dict[str, Any]]]:
+    """Rows of the Combos sheet's "which combination each check applies" table."""
+    return {"combination_uses": combination_uses(spec)}
+
+
+COLLECTION_BUILDERS = [
+    levels_collections,
+    wind_collections,
+    combination_use_collections,
+    wall_input_collections,
+    diaphragm_collections,
+    wall_collections,
+]

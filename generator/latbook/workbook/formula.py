@@ -132,5 +132,13 @@ def _col(tpos: TablePos, field: str) -> int:
         raise TemplateError(f"table '{tpos.name}' has no column '{field}'") from None
 
 
+_PLAIN_SHEET = re.compile(r"^[A-Za-z_][A-Za-z0-9_]*$")
+
+
 def _qualify(target_sheet: str, current_sheet: str, ref: str) -> str:
-    return ref if target_sheet == current_sheet else f"{target_sheet}!{ref}"
+    """`ref` prefixed with its sheet when on another sheet; quoted when the name needs it
+    (a level id may hold '-', e.g. sheet Dia_L-2_x)."""
+    if target_sheet == current_sheet:
+        return ref
+    name = target_sheet if _PLAIN_SHEET.match(target_sheet) else f"'{target_sheet}'"
+    return f"{name}!{ref}"

@@ -78,10 +78,50 @@ def _place_blocks(plan: SheetPlan, context: Context, registry: Registry) -> None
             row = _place_table(plan, block, context, registry, row)
         elif block.kind == "note":
             row = _place_note(plan, block, row)
+        elif block.kind == "chart":
+            row = _place_chart(plan, block, context, row)
         else:
             raise ValueError(f"{plan.template.source}: unknown block kind '{block.kind}'")
         row += 1
     plan.last_row = row
+
+
+CHART_ROWS = 16  # rows a chart covers (xlsxwriter's default chart is 288 px, 15 rows of 20 px)
+
+
+def _place_chart(plan: SheetPlan, block: Block, context: Context, row: int) -> int:
+    """Reserve rows for a chart fed from a table's columns; the builder draws it.
+
+    `[blocks.chart]` keys: `table` (a table name, <ctx> allowed; it may be laid out anywhere),
+    `x` (field of the x values), `series` (list of {field, name, when}; a series whose `when`
+    fails is left out), optional `type` ("scatter" or "line"), `subtype` (scatter lines:
+    "straight", the default, or "smooth"),
+    `x_title`, `y_title`, `rows` (height in rows, default CHART_ROWS). The chart's title is the
+    block's title. Series are live: they point at the table's formula cells.
+    """
+    spec = dict(block.chart or {})
+    ctx = plan.ctx
+    series = [
+        {"field": s["field"], "name": substitute_ctx(s.get("name", s["field"]), ctx)}
+        for s in spec.get("series", [])
+        if context.holds(s.get("when"))
+    ]
+    rows = int(spec.get("rows", CHART_ROWS))
+    plan.charts.append(
+        {
+            "row": row,
+            "rows": rows,
+            "type": spec.get("type", "scatter"),
+            "subtype": spec.get("subtype", "straight"),
+            "table": substitute_ctx(spec["table"], ctx),
+            "x": spec["x"],
+            "series": series,
+            "title": substitute_ctx(block.title, ctx),
+            "x_title": substitute_ctx(spec.get("x_title", ""), ctx),
+            "y_title": substitute_ctx(spec.get("y_title", ""), ctx),
+        }
+    )
+    return row + rows
 
 
 def _place_note(plan: SheetPlan, block: Block, row: int) -> int:
