@@ -43,6 +43,7 @@ from latbook import __version__  # noqa: E402
 from latbook.build import build_workbook  # noqa: E402
 from latbook.recalc import find_soffice, recalculate_with_libreoffice  # noqa: E402
 from latbook.spec.models import MAX_LEVELS, MAX_WALL_LINES  # noqa: E402
+from latbook.workbook.builder import WORKBOOK_OPTIONS  # noqa: E402
 from latbook.workbook_functions import functions_used  # noqa: E402
 from tests.helpers.specgen import make_spec  # noqa: E402
 
@@ -108,8 +109,9 @@ def recording(log: WriteLog):
 
 
 def replay(log: WriteLog, path: Path) -> None:
-    """The floor: bare xlsxwriter writing the same sheets, formats and cells."""
-    wb = xlsxwriter.Workbook(str(path), {"strings_to_formulas": False, "strings_to_urls": False})
+    """The floor: bare xlsxwriter writing the same sheets, formats and cells, with the
+    workbook options the build used."""
+    wb = xlsxwriter.Workbook(str(path), WORKBOOK_OPTIONS)
     formats = {key: wb.add_format(props) for key, props in log.formats.items()}
     sheets = {name: wb.add_worksheet(name) for name in log.sheets}
     for method, sheet, args, kwargs in log.calls:
