@@ -287,6 +287,10 @@ def _segment(rng, seg_id, start_ft, length_ft, wall_ids, has_story_below) -> dic
     if rng.random() < 0.2:
         segment["point_load_start_lb"] = _r(rng.uniform(0, 5000), 0)
         segment["point_load_end_lb"] = _r(rng.uniform(0, 5000), 0)
+    # A side stream, so that the specs of existing seeds stay as they were.
+    side = random.Random(f"{seg_id}|{start_ft}|{length_ft}|{segment['dead_load_plf']}")
+    if side.random() < 0.4:
+        segment["hold_down_capacity_lb"] = _r(side.uniform(1500, 20000), 0)
     return segment
 
 

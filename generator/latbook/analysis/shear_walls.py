@@ -88,6 +88,7 @@ SEGMENT_INPUTS = (
     "point_load_start_lb",
     "point_load_end_lb",
     "hold_down_offset_ft",
+    "hold_down_capacity_lb",
 )
 ASSEMBLY_INPUTS = (
     "vs_nominal_plf",
@@ -187,6 +188,7 @@ def _segment_forces(out, base, above, seg: SegmentPlace, g, src, V_seg, v_eff, c
     C_story = sw.end_post_compression_lb(M_ot, s.length_ft, s.hold_down_offset_ft, P_end_lb)
     T_above = out[f"{above}.T_{src}"] if above else 0.0
     C_above = out[f"{above}.C_{src}"] if above else 0.0
+    T = sw.accumulate_hold_down(T_story, T_above)
     values = {
         "V": V_seg,
         "cap": capacity,
@@ -194,11 +196,24 @@ def _segment_forces(out, base, above, seg: SegmentPlace, g, src, V_seg, v_eff, c
         "v_slide": fac * sw.sliding_unit_shear_plf(V_seg, s.length_ft),
         "M_ot": M_ot,
         "uplift": uplift,
-        "T": sw.accumulate_hold_down(T_story, T_above),
+        "T": T,
+        "T_dcr": hold_down_dcr(T, s.hold_down_capacity_lb),
         "C": C_story + C_above,
     }
     for key, value in values.items():
         out[f"{base}.{key}_{src}"] = value
+
+
+NOT_GIVEN = "not given"
+
+
+def hold_down_dcr(T_lb: float, capacity_lb: float | None) -> float | str:
+    """Hold-down demand/capacity ratio T / capacity (AWC SDPWS-2015 §4.3.6.4.2; T at the
+    design level, capacity allowable for ASD or design for LRFD, from the manufacturer) [-].
+    Without a capacity: "not given" where the segment lifts, 0 where it does not."""
+    if capacity_lb is not None:
+        return T_lb / capacity_lb
+    return NOT_GIVEN if T_lb > 0 else 0.0
 
 
 def _deflection(out, base, g, src, V_seg, a: ShearWallAssembly) -> float:
@@ -231,6 +246,20 @@ def _story_governing(out, story: StoryPlace, sources) -> None:
             i = values.index(max(values))
             out[f"walls.{lv}.{name}_{src}_max"] = values[i]
             out[f"walls.{lv}.{name}_{src}_gov"] = segment_label(segs[i])
+        _hold_down_governing(out, lv, segs, src)
+
+
+def _hold_down_governing(out, lv: str, segs: list[SegmentPlace], src: str) -> None:
+    """Largest hold-down DCR of the story among segments with a capacity (0 when none is
+    numeric, as the workbook's MAX), its segment, and the count left unchecked."""
+    values = [out[f"walls.{lv}.seg.{s.key}.T_dcr_{src}"] for s in segs]
+    numeric = [v for v in values if not isinstance(v, str)]
+    best = max(numeric, default=0.0)
+    out[f"walls.{lv}.T_dcr_{src}_max"] = best
+    out[f"walls.{lv}.T_dcr_{src}_gov"] = (
+        segment_label(segs[values.index(best)]) if numeric else "none with a capacity"
+    )
+    out[f"walls.{lv}.T_dcr_{src}_missing"] = len(values) - len(numeric)
 
 
 def segment_label(seg: SegmentPlace) -> str:

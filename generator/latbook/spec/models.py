@@ -217,6 +217,14 @@ class Segment(_Strict):
     hold_down_continues_below: bool = Field(
         False, description="True: the hold-down stacks onto the segment below."
     )
+    hold_down_capacity_lb: Annotated[float, Field(gt=0, le=1.0e6)] | None = Field(
+        None,
+        description=(
+            "Hold-down tension capacity at the design method's level (allowable for ASD, design"
+            " strength for LRFD), lb: the engineer's input from the hold-down manufacturer's"
+            " published values. Blank: no hold-down check (the Summary says so)."
+        ),
+    )
 
 
 class Opening(_Strict):

@@ -12,12 +12,18 @@ from latbook.spec.models import Spec
 from latbook.spec.wall_stories import levels_top_down, wall_stories
 
 SOURCE_TEXT = {"seis": "seismic", "wind": "wind"}
+DIAPHRAGM_FAMILIES = (
+    ("diaph", "diaphragm", "-"),
+    ("chord", "chord", "lb"),
+    ("collector", "collector", "lb"),
+)
+"""(kind, family, demand unit) of the rows per level and load direction."""
 
 
 @dataclass(frozen=True)
 class SummaryItem:
     key: str
-    kind: str  # "diaph", "wall", "hold_down", "drift"
+    kind: str  # "diaph", "chord", "collector", "wall", "hold_down", "drift"
     family: str
     source: str  # "seis", "wind" or "both"
     level: str = ""
@@ -31,12 +37,13 @@ class SummaryItem:
 
 
 def summary_items(spec: Spec) -> list[SummaryItem]:
-    """Every Summary row, diaphragms first, then walls, hold-downs and drift."""
+    """Every Summary row: diaphragms, chords, collectors, then walls, hold-downs and drift."""
     if not spec.wall_lines:
         return []
     sources = [s for s, on in (("seis", spec.seismic), ("wind", spec.wind)) if on is not None]
     items = [
-        SummaryItem(f"diaph.{lv.id}.{d}", "diaph", "diaphragm", "both", lv.id, d)
+        SummaryItem(f"{kind}.{lv.id}.{d}", kind, family, "both", lv.id, d, unit)
+        for kind, family, unit in DIAPHRAGM_FAMILIES
         for lv in levels_top_down(spec)
         for d in ("x", "y")
     ]
