@@ -44,10 +44,18 @@ CASES = [
     ("building.levels.0.elevation_ft", -3.0, "$.building.levels[0].elevation_ft", "greater_than"),
     ("building.levels.0.elevation_ft", 0.0, "$.building.levels[0].elevation_ft", "greater_than"),
     ("building.levels.1.elevation_ft", 5.0, "$.building.levels[1].elevation_ft", "elevation_order"),
-    ("building.levels.0.seismic_weight_kip", "heavy", "$.building.levels[0].seismic_weight_kip",
-     "float_parsing"),
-    ("seismic.ground_motion.site_class", "Q", "$.seismic.ground_motion.site_class",
-     "literal_error"),
+    (
+        "building.levels.0.seismic_weight_kip",
+        "heavy",
+        "$.building.levels[0].seismic_weight_kip",
+        "float_type",
+    ),
+    (
+        "seismic.ground_motion.site_class",
+        "Q",
+        "$.seismic.ground_motion.site_class",
+        "literal_error",
+    ),
     ("design_method", "WSD", "$.design_method", "literal_error"),
     ("seismic.system.R", 0.5, "$.seismic.system.R", "greater_than_equal"),
     ("seismic.rho", 1.1, "$.seismic.rho", "literal_error"),
@@ -77,8 +85,9 @@ def test_refused_with_path_and_rule(path, value, where, rule, tmp_path, capsys):
 
 def test_site_specific_study_refused(tmp_path, capsys):
     # ASCE 7-16 Table 11.4-1: site class E with Ss >= 1.0 says "See Section 11.4.8" (from memory).
-    data = _set(_set(demo(), "seismic.ground_motion.site_class", "E"),
-                "seismic.ground_motion.Ss_g", 1.2)
+    data = _set(
+        _set(demo(), "seismic.ground_motion.site_class", "E"), "seismic.ground_motion.Ss_g", 1.2
+    )
     code, err, out = run_build(data, tmp_path, capsys)
     assert code == 2
     assert "$.seismic.ground_motion.Ss_g" in err and "11.4.8" in err
@@ -111,13 +120,14 @@ def test_validate_ok_and_results_json(capsys):
     assert main(["validate", str(DEMO)]) == 0
     assert main(["results", str(DEMO), "--json"]) == 0
     out = capsys.readouterr().out
-    results = json.loads(out[out.index("{"):])
+    results = json.loads(out[out.index("{") :])
     assert results["seismic.V"] == pytest.approx(results["seismic.Cs"] * results["seismic.W"])
 
 
 def test_python_dash_m_and_schema(tmp_path):
-    proc = subprocess.run([sys.executable, "-m", "latbook", "schema"], capture_output=True,
-                          text=True, check=False)
+    proc = subprocess.run(
+        [sys.executable, "-m", "latbook", "schema"], capture_output=True, text=True, check=False
+    )
     assert proc.returncode == 0
     assert json.loads(proc.stdout)["title"] == "Spec"
 

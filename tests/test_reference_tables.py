@@ -55,8 +55,9 @@ def test_cu_breakpoints():
         assert cu == pytest.approx(elf.Cu(sd1), abs=1e-12)
 
 
-@pytest.mark.parametrize("name,func", [("SDC_short", sdc.sdc_short_period),
-                                       ("SDC_long", sdc.sdc_one_second)])
+@pytest.mark.parametrize(
+    "name,func", [("SDC_short", sdc.sdc_short_period), ("SDC_long", sdc.sdc_one_second)]
+)
 def test_sdc_rows(name, func):
     t = TABLES[name]
     for bound, (low_rc, rc_iv) in zip(t["rows"], t["values"], strict=True):

@@ -69,5 +69,8 @@ def formula_errors(values: dict[tuple[str, str], Any]) -> list[str]:
     """Cells holding an error value."""
     from tests.helpers.evaluator import EXCEL_ERROR_TEXTS
 
-    return [f"{s}!{c}: {v}" for (s, c), v in values.items() if isinstance(v, str)
-            and v in EXCEL_ERROR_TEXTS]
+    return [
+        f"{s}!{c}: {v}"
+        for (s, c), v in values.items()
+        if isinstance(v, str) and v in EXCEL_ERROR_TEXTS
+    ]

@@ -31,6 +31,11 @@ class TemplateError(ValueError):
     """A template refers to something that does not exist: a developer error."""
 
 
+def ctx_fields(pattern: str) -> list[str]:
+    """The `<field>` names a pattern uses, in order of appearance."""
+    return _CTX.findall(pattern)
+
+
 def substitute_ctx(pattern: str, ctx: Mapping[str, Any]) -> str:
     """Replace every `<field>` by str(ctx[field])."""
 

@@ -10,7 +10,7 @@ from dataclasses import dataclass, field
 from typing import Any
 
 from latbook.workbook.context import Context
-from latbook.workbook.formula import substitute_ctx
+from latbook.workbook.formula import ctx_fields, substitute_ctx
 from latbook.workbook.registry import Entry, Registry, TablePos
 from latbook.workbook.templates import Block, Column, Row, SheetTemplate
 
@@ -201,9 +201,12 @@ def _place_table(
     name = substitute_ctx(block.table or "", plan.ctx)
     tpos = TablePos(name=name, sheet=plan.name, key=block.key or "key", first_row=first)
     tpos.cols = {col.field: c for c, col in enumerate(columns)}
+    tpos.patterns = {col.field: col.id for col in columns if col.id}
+    used = sorted({f for pattern in tpos.patterns.values() for f in ctx_fields(pattern)})
     for i, row_ctx in enumerate(rows):
         merged = {**plan.ctx, **row_ctx, "row_index": i}
         tpos.rows[str(merged[tpos.key])] = first + i
+        tpos.bindings[str(merged[tpos.key])] = {f: str(merged[f]) for f in used}
         for c, col in enumerate(columns):
             plan.cells.append(_table_cell(plan, col, merged, name, first + i, c, context, registry))
     registry.add_table(tpos)
@@ -228,10 +231,10 @@ def _table_cell(
         cell.style = "input"
         cell.value = spec_value(context.spec_data, path)
         cell.validation = col.validation
-        _register_input(registry, qid, plan.name, row, c, label, col, None, path)
+        _register_input(registry, qid, plan.name, row, c, label, col, None, path, table)
     elif col.formula is not None:
         cell.formula = pick_variant(col.formula, ctx)
-        _register_calc(registry, qid, plan.name, row, c, label, col.unit, col.clause, None)
+        _register_calc(registry, qid, plan.name, row, c, label, col.unit, col.clause, None, table)
     elif col.text is not None:
         cell.style = "text"
         cell.text = substitute_ctx(col.text, ctx)
@@ -248,13 +251,13 @@ def pick_variant(formula: str | dict[str, str], ctx: dict[str, Any]) -> str:
     return formula["default"]
 
 
-def _register_calc(registry, qid, sheet, row, col, label, unit, clause, name) -> None:
+def _register_calc(registry, qid, sheet, row, col, label, unit, clause, name, table=None) -> None:
     if qid is None:
         raise ValueError(f"a formula cell on {sheet} has no quantity id ('{label}')")
-    registry.add(Entry(qid, sheet, row, col, "calc", label, unit, clause, name))
+    registry.add(Entry(qid, sheet, row, col, "calc", label, unit, clause, name, table=table))
 
 
-def _register_input(registry, qid, sheet, row, col, label, tpl, name, path) -> None:
+def _register_input(registry, qid, sheet, row, col, label, tpl, name, path, table=None) -> None:
     if qid is None:
         raise ValueError(f"an input cell on {sheet} has no quantity id ('{label}')")
     v = tpl.validation or {}
@@ -274,6 +277,7 @@ def _register_input(registry, qid, sheet, row, col, label, tpl, name, path) -> N
             choices,
             v.get("min"),
             v.get("max"),
+            table,
         )
     )
 

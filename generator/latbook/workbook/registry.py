@@ -29,6 +29,7 @@ class Entry:
     choices: tuple[str, ...] | None = None
     minimum: float | None = None
     maximum: float | None = None
+    table: str | None = None
 
     @property
     def address(self) -> str:
@@ -45,6 +46,8 @@ class TablePos:
     first_row: int
     rows: dict[str, int] = field(default_factory=dict)
     cols: dict[str, int] = field(default_factory=dict)
+    patterns: dict[str, str] = field(default_factory=dict)  # field -> quantity id pattern
+    bindings: dict[str, dict[str, str]] = field(default_factory=dict)  # key -> ctx used by ids
 
     @property
     def last_row(self) -> int:

@@ -2,7 +2,8 @@
 
 A sheet template lists blocks; a block is a list of scalar rows, a table over a
 collection of rows, a note, or a chart (`kind = "chart"` with a `[blocks.chart]` table:
-series drawn from a table's columns by field name; keys in `latbook.workbook.layout._place_chart`). Formulas are patterns: see `latbook.workbook.formula`.
+series drawn from a table's columns by field name; keys in
+`latbook.workbook.layout._place_chart`). Formulas are patterns: see `latbook.workbook.formula`.
 """
 
 from __future__ import annotations
