@@ -147,6 +147,7 @@ def _write(spec, results, plans, registry, tmp, spec_json, spec_sha256, protect)
     index = wb.add_worksheet(INDEX_SHEET)
     last = write_index(index, registry, styles)
     _finish_sheet(index, header, last, 6, protect, landscape=True)
+    index.hide()  # for scripts and `latbook verify`; unhide to browse, it is not printed
 
     data = wb.add_worksheet(SPEC_SHEET)
     _write_spec_data(data, spec_json, spec_sha256, styles)

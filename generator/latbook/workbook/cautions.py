@@ -13,5 +13,7 @@ CAUTION_LINES = (
     "Only the procedures named on each sheet are implemented; their limits of applicability "
     "(ASCE 7-16 Table 12.6-1, ch. 27 Part 1, AWC SDPWS) must be confirmed by the engineer.",
     "Green cells are inputs. Everything else is a live formula; sheets are protected without "
-    "a password so that a formula is not typed over by accident.",
+    "a password so that a formula is not typed over by accident. The hidden Index sheet maps "
+    "every quantity id to its cell (unhide it to browse); another hidden sheet holds the "
+    "spec that built this file.",
 )

@@ -2,9 +2,10 @@
 
 Three parts. Scalars: one row per quantity outside a table (id -> cell). Table columns: one
 row per column, its id pattern (e.g. `seismic.level.<level>.Fx`) and cell range. Table rows:
-one row per table row, its sheet row and the values of the pattern's `<fields>`. To find an
-id in a table, match it to a pattern, read the field values, find the row with those values
-and take the column of the range. `locate_in_index` does exactly that.
+one row per table, its first sheet row and, row after row, the values of the patterns'
+`<fields>` ("level=L2;line=A|level=L2;line=B|..." continued in the next cells when long). To
+find an id in a table, match it to a pattern, read the field values, find the row with those
+values and take the column of the range. `locate_in_index` does exactly that.
 """
 
 from __future__ import annotations
@@ -21,7 +22,13 @@ from latbook.workbook.styles import Styles
 INDEX_SHEET = "Index"
 SCALAR_HEADERS = ("Quantity id", "Kind", "Cell", "Defined name", "Description", "Unit", "Clause")
 COLUMN_HEADERS = ("Id pattern", "Kind", "Cells", "Table", "Column heading", "Unit", "Clause")
-ROW_HEADERS = ("Table", "Sheet row", "Field values (field=value; ...)")
+ROW_HEADERS = (
+    "Table",
+    "First sheet row",
+    "Field values of each row, in order (field=value;...|...)",
+)
+ROW_SEP, FIELD_SEP = "|", ";"
+CHUNK_CHARS = 30000
 PART_TITLES = ("Scalars and inputs", "Table columns", "Table rows")
 
 
@@ -57,12 +64,23 @@ def write_index(ws: Worksheet, registry: Registry, styles: Styles) -> int:
             columns.append((pattern, first.kind, cells, t.name, label, first.unit, first.clause))
     row = _part(ws, row + 1, 1, COLUMN_HEADERS, styles, columns)
     rows = (
-        (t.name, str(r + 1), "; ".join(f"{k}={v}" for k, v in t.bindings[key].items()))
+        (
+            t.name,
+            str(t.first_row + 1),
+            *_chunks(
+                ROW_SEP.join(
+                    FIELD_SEP.join(f"{k}={v}" for k, v in t.bindings[key].items()) for key in t.rows
+                )
+            ),
+        )
         for t in registry.tables.values()
-        if t.patterns
-        for key, r in t.rows.items()
+        if t.patterns and t.rows
     )
     return _part(ws, row + 1, 2, ROW_HEADERS, styles, rows)
+
+
+def _chunks(text: str) -> list[str]:
+    return [text[i : i + CHUNK_CHARS] for i in range(0, len(text), CHUNK_CHARS)] or [""]
 
 
 def _part(ws, row, n, headers, styles, values) -> int:
@@ -113,8 +131,10 @@ def _read_index(path: str, _mtime_ns: int):
         elif part == 1:
             columns.append((re.compile(_pattern_regex(first)), values[2], values[3]))
         elif part == 2:
-            pairs = (item.split("=", 1) for item in (values[2] or "").split("; ") if item)
-            rows[(first, _binding(pairs))] = int(values[1])
+            text = "".join(v for v in values[2:] if v)
+            for i, row_text in enumerate(text.split(ROW_SEP)):
+                pairs = (item.split("=", 1) for item in row_text.split(FIELD_SEP) if item)
+                rows[(first, _binding(pairs))] = int(values[1]) + i
     return scalars, columns, rows
 
 
