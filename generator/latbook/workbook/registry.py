@@ -3,10 +3,12 @@
 from __future__ import annotations
 
 from dataclasses import dataclass, field
+from functools import lru_cache
 
 from xlsxwriter.utility import xl_rowcol_to_cell
 
 
+@lru_cache(maxsize=1 << 16)
 def a1(row: int, col: int, absolute: bool = False) -> str:
     """Zero-based (row, col) -> 'C5' (or '$C$5')."""
     return xl_rowcol_to_cell(row, col, row_abs=absolute, col_abs=absolute)
