@@ -146,8 +146,10 @@ def _write(spec, results, plans, registry, tmp, spec_json, spec_sha256, protect)
 
     index = wb.add_worksheet(INDEX_SHEET)
     last = write_index(index, registry, styles)
-    _finish_sheet(index, header, last, 6, protect, landscape=True)
-    index.hide()  # for scripts and `latbook verify`; unhide to browse, it is not printed
+    if protect:
+        index.protect()
+    # Hidden and without a print area (LibreOffice prints hidden sheets that have one).
+    index.hide()
 
     data = wb.add_worksheet(SPEC_SHEET)
     _write_spec_data(data, spec_json, spec_sha256, styles)
