@@ -42,6 +42,9 @@ TABLE_WIDTH = 12
 WORKBOOK_OPTIONS = {"strings_to_formulas": False, "strings_to_urls": False, "in_memory": True}
 
 
+TEXT_RESULT_STYLES = {"calc": "calc_text", "result": "result_text"}
+
+
 class BuildError(RuntimeError):
     """The generator and the engine disagree about what exists: a developer error."""
 
@@ -203,7 +206,10 @@ def _write_cell(ws, sheet, cell: Cell, registry, tables, results, styles) -> Non
     fmt = styles.get(cell.style, cell.fmt)
     if cell.formula is not None:
         formula = cell_formula(cell, sheet, registry)
-        ws.write_formula(cell.row, cell.col, formula, fmt, _cached(results[cell.qid]))
+        value = _cached(results[cell.qid])
+        if isinstance(value, str) and cell.style in TEXT_RESULT_STYLES:
+            fmt = styles.get(TEXT_RESULT_STYLES[cell.style], cell.fmt)  # text reads from the left
+        ws.write_formula(cell.row, cell.col, formula, fmt, value)
     elif cell.style == "input":
         _write_input(ws, cell, fmt)
     elif cell.text is not None:

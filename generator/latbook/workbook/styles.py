@@ -25,6 +25,8 @@ _BASE: dict[str, dict[str, Any]] = {
     "input": {"locked": False, "bg_color": "#e3f1e0", "border": 3, "border_color": "#4f7f4a"},
     "calc": {"align": "right"},
     "result": {"bold": True, "top": 1, "bottom": 1, "align": "right"},
+    "calc_text": {"align": "left"},
+    "result_text": {"bold": True, "top": 1, "bottom": 1, "align": "left"},
     "th": {"bold": True, "text_wrap": True, "align": "center", "valign": "bottom", "top": 1},
     "th_unit": {"font_size": 8, "align": "center"},
     "th_clause": {
@@ -40,7 +42,7 @@ _BASE: dict[str, dict[str, Any]] = {
     "cover_warning": {"bold": True, "text_wrap": True, "valign": "top", "border": 2},
 }
 
-NUMERIC_STYLES = {"input", "calc", "result"}
+NUMERIC_STYLES = {"input", "calc", "result", "calc_text", "result_text"}
 
 
 class Styles:
