@@ -3,7 +3,6 @@
 from __future__ import annotations
 
 import hashlib
-import json
 from dataclasses import dataclass
 from pathlib import Path
 from typing import Any
@@ -39,7 +38,3 @@ def build_workbook(data: dict[str, Any], out: Path, *, protect: bool = True) -> 
         spec, results, Path(out), spec_json=text, spec_sha256=digest, protect=protect
     )
     return BuildResult(spec, results, registry, digest, Path(out))
-
-
-def dump_results(results: dict[str, Any]) -> str:
-    return json.dumps(results, indent=2, sort_keys=True)

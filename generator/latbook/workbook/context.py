@@ -44,8 +44,6 @@ def build_context(spec: Spec) -> Context:
             flags.add("T_computed")
     if spec.wind is not None:
         flags.add("wind")
-        if spec.wind.parapet_height_ft > 0:
-            flags.add("parapet")
     if spec.wall_lines:
         flags.add("walls")
     ctx = Context(

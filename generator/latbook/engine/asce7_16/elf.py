@@ -5,6 +5,8 @@ Not implemented here: the §12.8.1.3 Ss cap for regular short buildings, the §1
 1.5 factor on Cs, and §12.8.4 horizontal distribution.
 """
 
+from itertools import accumulate
+
 from latbook.engine.asce7_16._interpolate import interpolate_clamped
 
 #: Approximate period parameters, ASCE 7-16 Table 12.8-2: key -> (Ct, x, description).
@@ -162,12 +164,7 @@ def story_shears(Fx_kip: list[float], heights_ft: list[float]) -> list[float]:
     in the story just below level i, so the last entry is the base shear.
     """
     _check_top_down(Fx_kip, heights_ft)
-    shears: list[float] = []
-    running = 0.0
-    for force in Fx_kip:
-        running += force
-        shears.append(running)
-    return shears
+    return list(accumulate(Fx_kip))
 
 
 def overturning_moments(Fx_kip: list[float], heights_ft: list[float]) -> list[float]:

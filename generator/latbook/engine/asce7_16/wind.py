@@ -27,6 +27,7 @@ in the net horizontal force and is not carried here.
 """
 
 import math
+from itertools import accumulate
 from typing import NamedTuple
 
 from latbook.engine.asce7_16._interpolate import interpolate_clamped
@@ -286,12 +287,7 @@ def story_shears(level_forces_kip_topdown: list[float]) -> list[float]:
 
     ASCE 7-16 §27.3 forces summed down the building (the §12.8.4 pattern applied to wind).
     """
-    shears: list[float] = []
-    total_kip = 0.0
-    for F_kip in level_forces_kip_topdown:
-        total_kip += F_kip
-        shears.append(total_kip)
-    return shears
+    return list(accumulate(level_forces_kip_topdown))
 
 
 def base_overturning_kipft(
