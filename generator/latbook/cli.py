@@ -1,22 +1,41 @@
 """Command line: parse options, call the library, print problems, set the exit code.
 
-Exit codes: 0 done; 1 the workbook or check failed (verify); 2 bad input or usage.
+Exit codes (latbook.exit_codes): 0 done; 1 a check failed (verify); 2 bad input or usage,
+nothing written; 3 the environment failed (output not writable, disk full, LibreOffice
+missing), nothing written; 130 interrupted (Ctrl-C); 143 terminated (SIGTERM).
 """
 
 from __future__ import annotations
 
 import argparse
+import contextlib
 import json
+import signal
 import sys
-from collections.abc import Sequence
+from collections.abc import Iterator, Sequence
 from pathlib import Path
 
 from latbook import __version__
-from latbook.cli_workbook import WORKBOOK_COMMANDS, add_workbook_commands
+from latbook.cli_workbook import WORKBOOK_COMMANDS, add_workbook_commands, output_error
+from latbook.exit_codes import (
+    EXIT_BAD_INPUT,
+    EXIT_ENVIRONMENT,
+    EXIT_FAILED,
+    EXIT_INTERRUPTED,
+    EXIT_OK,
+    EXIT_TERMINATED,
+)
 from latbook.problems import Problem, SpecError
 from latbook.workbook.cautions import CAUTION_SHORT
 
-EXIT_OK, EXIT_FAILED, EXIT_BAD_INPUT = 0, 1, 2
+__all__ = ["EXIT_BAD_INPUT", "EXIT_ENVIRONMENT", "EXIT_FAILED", "EXIT_OK", "main"]
+
+MAX_PROBLEMS_LISTED = 50
+"""Problems printed in full; the rest are counted (a hostile spec can have millions)."""
+
+
+class Terminated(BaseException):
+    """SIGTERM arrived: unwinds like Ctrl-C so every temp file is removed on the way out."""
 
 
 def _parser() -> argparse.ArgumentParser:
@@ -24,6 +43,8 @@ def _parser() -> argparse.ArgumentParser:
         prog="latbook",
         description="Lateral-force calc workbooks with live formulas from a JSON spec. "
         + CAUTION_SHORT,
+        epilog="Exit codes: 0 done, 1 a check failed, 2 bad input (nothing written), "
+        "3 environment failure (nothing written), 130 interrupted, 143 terminated.",
     )
     p.add_argument("--version", action="version", version=f"latbook {__version__}")
     sub = p.add_subparsers(dest="command", required=True)
@@ -46,20 +67,52 @@ def _parser() -> argparse.ArgumentParser:
 
 
 def main(argv: Sequence[str] | None = None) -> int:
-    args = _parser().parse_args(argv)
     try:
-        return COMMANDS[args.command](args)
-    except SpecError as exc:
-        _print_problems(exc.problems)
-        return EXIT_BAD_INPUT
+        with _sigterm_unwinds():
+            args = _parser().parse_args(argv)
+            try:
+                return COMMANDS[args.command](args)
+            except SpecError as exc:
+                print_problems(exc.problems)
+                return EXIT_BAD_INPUT
+            except MemoryError:
+                print("latbook: out of memory; nothing was written", file=sys.stderr)
+                return EXIT_ENVIRONMENT
+    except KeyboardInterrupt:
+        print("latbook: interrupted; nothing was written", file=sys.stderr)
+        return EXIT_INTERRUPTED
+    except Terminated:
+        print("latbook: terminated; nothing was written", file=sys.stderr)
+        return EXIT_TERMINATED
 
 
-def _print_problems(problems: Sequence[Problem]) -> None:
+@contextlib.contextmanager
+def _sigterm_unwinds() -> Iterator[None]:
+    """While a command runs, SIGTERM raises Terminated (outside the main thread: no-op)."""
+
+    def _raise(signum, frame):
+        raise Terminated
+
+    try:
+        previous = signal.signal(signal.SIGTERM, _raise)
+    except ValueError:  # not the main thread
+        yield
+        return
+    try:
+        yield
+    finally:
+        signal.signal(signal.SIGTERM, previous)
+
+
+def print_problems(problems: Sequence[Problem], limit: int = MAX_PROBLEMS_LISTED) -> None:
+    """The first `limit` problems and a count of the rest, on stderr."""
     print(
         f"latbook: the spec has {len(problems)} problem(s); nothing was written:", file=sys.stderr
     )
-    for problem in problems:
+    for problem in problems[:limit]:
         print(f"  {problem}", file=sys.stderr)
+    if len(problems) > limit:
+        print(f"  ... and {len(problems) - limit} more problem(s) not listed", file=sys.stderr)
 
 
 def _cmd_build(args: argparse.Namespace) -> int:
@@ -69,16 +122,21 @@ def _cmd_build(args: argparse.Namespace) -> int:
     out: Path = args.output
     if out.suffix.lower() != ".xlsx":
         raise SpecError([Problem("-o", "output", "the output file must end in .xlsx")])
-    if not out.parent.exists():
-        raise SpecError([Problem("-o", "output", f"folder {out.parent} does not exist")])
-    if out.is_dir():
-        raise SpecError([Problem("-o", "output", f"{out} is a folder, not a file")])
-    data = load_json(args.spec)
     try:
+        if not out.parent.is_dir():
+            raise SpecError([Problem("-o", "output", f"folder {out.parent} does not exist")])
+        if out.is_dir():
+            raise SpecError([Problem("-o", "output", f"{out} is a folder, not a file")])
+        data = load_json(args.spec)
         result = build_workbook(data, out, protect=not args.no_protect)
-    except OSError as exc:
-        print(f"latbook: cannot write {out}: {exc.strerror or exc}", file=sys.stderr)
-        return EXIT_FAILED
+    except SpecError:
+        raise
+    except Exception as exc:
+        reason = output_error(exc)
+        if reason is None:
+            raise
+        print(f"latbook: cannot write {out}: {reason}; nothing was written", file=sys.stderr)
+        return EXIT_ENVIRONMENT
     n_calc = len(result.registry.calcs())
     print(f"wrote {out} ({n_calc} calculated cells, spec SHA-256 {result.spec_sha256[:12]})")
     print(f"caution: {CAUTION_SHORT}")
@@ -86,9 +144,10 @@ def _cmd_build(args: argparse.Namespace) -> int:
 
 
 def _cmd_validate(args: argparse.Namespace) -> int:
-    from latbook.spec.load import load_spec
+    from latbook.build import check_spec
+    from latbook.spec.load import load_json
 
-    load_spec(args.spec)
+    check_spec(load_json(args.spec))
     print(f"{args.spec}: valid")
     return EXIT_OK
 
@@ -101,10 +160,10 @@ def _cmd_schema(args: argparse.Namespace) -> int:
 
 
 def _cmd_results(args: argparse.Namespace) -> int:
-    from latbook.analysis import compute_results
-    from latbook.spec.load import load_spec
+    from latbook.build import check_spec
+    from latbook.spec.load import load_json
 
-    results = compute_results(load_spec(args.spec))
+    _, results = check_spec(load_json(args.spec))
     if args.json:
         print(json.dumps(results, indent=2, sort_keys=True))
     else:

@@ -19,9 +19,10 @@ from latbook.workbook.builder import layout
 from latbook.workbook.context import build_context
 from latbook.workbook.layout import spec_value
 from latbook.workbook.registry import Entry, Registry
-from latbook.workbook_file import WorkbookCells
+from latbook.workbook_file import UnreadableWorkbook, WorkbookCells
 
 _BOOLEAN_FORMULAS = {"=TRUE()": True, "=FALSE()": False, "=TRUE": True, "=FALSE": False}
+MAX_PROBLEMS_SHOWN = 10
 _PATH_PART = re.compile(r"([^.\[\]]+)|\[(\d+)\]")
 
 
@@ -53,8 +54,18 @@ class ReadBack:
 
 
 def built_spec(cells: WorkbookCells) -> tuple[Spec, Registry]:
-    """The spec embedded in the workbook and the registry of its layout."""
-    spec = parse_spec(cells.spec.data)
+    """The spec embedded in the workbook and the registry of its layout; raise
+    UnreadableWorkbook when that spec breaks a rule (nothing can be read against it)."""
+    try:
+        spec = parse_spec(cells.spec.data)
+    except SpecError as exc:
+        shown = "; ".join(str(p) for p in exc.problems[:MAX_PROBLEMS_SHOWN])
+        more = len(exc.problems) - MAX_PROBLEMS_SHOWN
+        shown += f"; and {more} more" if more > 0 else ""
+        raise UnreadableWorkbook(
+            f"{cells.path}: the embedded spec does not validate ({shown}); rebuild from a "
+            "corrected spec"
+        ) from None
     _, registry = layout(spec)
     return spec, registry
 

@@ -23,7 +23,7 @@ from latbook.readback import InputReading, ReadBack, built_spec, locate, read_in
 from latbook.spec.load import parse_spec
 from latbook.workbook.builder import layout
 from latbook.workbook.rendered import expected_formulas
-from latbook.workbook_file import UnreadableWorkbook, WorkbookCells, read_workbook
+from latbook.workbook_file import WorkbookCells, read_workbook
 
 REL_TOL = 1e-9
 ABS_TOL = 1e-9
@@ -110,10 +110,7 @@ class VerifyReport:
 def verify_workbook(path: Path, *, recalc: bool = False) -> VerifyReport:
     """Every finding for the workbook at `path`; raises UnreadableWorkbook."""
     cells = read_workbook(Path(path))
-    try:
-        built, _ = built_spec(cells)
-    except SpecError as exc:
-        raise UnreadableWorkbook(f"{path}: the embedded spec does not validate: {exc}") from None
+    built, _ = built_spec(cells)  # raises UnreadableWorkbook for an embedded spec refused
     report = VerifyReport(
         Path(path), cells.spec.sha256_stored, cells.spec.generator_version, recalc
     )
@@ -170,31 +167,17 @@ def _input_findings(back: ReadBack) -> list[Finding]:
 
 def _range_finding(reading: InputReading) -> Finding | None:
     e, v = reading.entry, reading.cell_value
-    if v is None or v == "":
+    if v is None or v == "" or e.limits is None:
         return None  # blank: allowed for an optional field, else the spec check reports it
+    if e.limits.allows(v):
+        return None
     where = {"address": e.address, "quantity": e.id, "label": e.label}
-    if e.choices is not None:
-        if not any(_same_choice(c, v) for c in e.choices):
-            allowed = ", ".join(str(c) for c in e.choices)
-            return Finding("input_not_allowed", f"{v!r} is not one of: {allowed}", **where)
-        return None
-    if e.minimum is None and e.maximum is None:
-        return None
+    allowed = e.limits.describe()
+    if e.limits.choices is not None:
+        return Finding("input_not_allowed", f"{v!r} is not {allowed}", **where)
     if isinstance(v, bool) or not isinstance(v, int | float):
         return Finding("input_out_of_range", f"{v!r} is not a number", **where)
-    lo = -math.inf if e.minimum is None else e.minimum
-    hi = math.inf if e.maximum is None else e.maximum
-    if not lo <= v <= hi:
-        return Finding("input_out_of_range", f"{v!r} is outside {lo:g} to {hi:g}", **where)
-    return None
-
-
-def _same_choice(choice: Any, value: Any) -> bool:
-    if isinstance(choice, bool) or isinstance(value, bool):
-        return choice is value
-    if isinstance(choice, int | float) and isinstance(value, int | float):
-        return not isinstance(value, bool) and float(choice) == float(value)
-    return str(choice) == str(value)
+    return Finding("input_out_of_range", f"{v!r} is outside the range: {allowed}", **where)
 
 
 def _current_spec(back: ReadBack, report: VerifyReport):

@@ -14,10 +14,18 @@ What a generated building looks like (invented data, for tests and demos only):
   at a random level and are continuous from there down to the base;
 - per line 1-4 segments stacked at the same places in every story, 0-3 openings per
   story in the gaps between them.
+
+`extreme=True` stretches a valid spec to the edges of what the spec allows: seismic weights
+spread log-uniformly from 1e-9 to 1e6 kip, every float nudged up by a few units in the last
+place so it needs 17 significant digits, and level ids that equal parts of sheet names
+('x', 'Dia', 'Walls'...). `risky_spec` then breaks rules the way real specs do (every wall
+of a line past the aspect limit, two lines at one position, a stacked hold-down with nothing
+below, a level id that names a sheet twice): it may or may not be valid.
 """
 
 from __future__ import annotations
 
+import math
 import random
 import string
 from typing import Any
@@ -48,6 +56,7 @@ def make_spec(
     level_order: str | None = None,
     long_ids: bool = False,
     text: str | None = None,
+    extreme: bool = False,
 ) -> dict[str, Any]:
     """A valid spec as JSON data.
 
@@ -104,7 +113,112 @@ def make_spec(
         spec["seismic"] = _seismic(rng, seismic)
     if wind:
         spec["wind"] = _wind(rng, top_ft)
+    if extreme:
+        _stretch(random.Random(rng.random()), spec)
     return spec
+
+
+# --- extremes and broken rules ---------------------------------------------------------------
+
+WEIGHT_RANGE_KIP = (1e-9, 1e6)
+# Level ids equal to parts of sheet names; all valid ('in' is not: Walls_in is a sheet).
+SHEET_PART_IDS = ("x", "y", "Dia", "Walls", "Wind", "Inputs", "Lines", "Summary", "Index")
+_NOT_NUDGED = {"rho"}  # a choice of 1.0 or 1.3, not a measure
+_NUDGED_DOWN = {"Omega0"}  # drawn up to its upper limit (3.0)
+
+
+def _stretch(rng: random.Random, spec: dict[str, Any]) -> None:
+    """Extreme weights, 17-digit floats and sheet-name level ids, keeping the spec valid."""
+    lo, hi = (math.log10(w) for w in WEIGHT_RANGE_KIP)
+    for level in spec["building"]["levels"]:
+        level["seismic_weight_kip"] = 10 ** rng.uniform(lo, hi)
+    _nudge_floats(rng, spec)
+    ids = rng.sample(SHEET_PART_IDS, k=min(len(SHEET_PART_IDS), len(spec["building"]["levels"])))
+    for level, new in zip(list(spec["building"]["levels"]), ids, strict=False):
+        if rng.random() < 0.7:
+            rename_level(spec, level["id"], new)
+
+
+def _nudge_floats(rng: random.Random, node: Any) -> None:
+    """Every float moved by 1-7 units in the last place, away from the limit it may sit on
+    (up, except fields drawn up to their upper limit), so the spec stays valid."""
+    items = node.items() if isinstance(node, dict) else enumerate(node)
+    for key, value in list(items):
+        if isinstance(value, float) and key not in _NOT_NUDGED and value != 0.0:
+            toward = -math.inf if key in _NUDGED_DOWN else math.inf
+            for _ in range(rng.randint(1, 7)):
+                value = math.nextafter(value, toward)
+            node[key] = value
+        elif isinstance(value, dict | list):
+            _nudge_floats(rng, value)
+
+
+def rename_level(spec: dict[str, Any], old: str, new: str) -> None:
+    """Give a level a new id, everywhere it is referenced."""
+    for level in spec["building"]["levels"]:
+        if level["id"] == old:
+            level["id"] = new
+    for line in spec.get("wall_lines", []):
+        for story in line["stories"]:
+            if story["level"] == old:
+                story["level"] = new
+
+
+def risky_spec(rng: random.Random, n_levels: int, n_lines: int) -> dict[str, Any]:
+    """An extreme spec with `n_lines` wall lines in all (0 to 2 x MAX_LINES_PER_DIR) and,
+    at random, rules broken as real specs break them; valid or not."""
+    spec = make_spec(rng, n_levels, max(2, (n_lines + 1) // 2), extreme=True)
+    lines = spec["wall_lines"]
+    if n_lines == 0:
+        del spec["wall_lines"]
+    else:
+        xs = [ln for ln in lines if ln["direction"] == "x"]
+        ys = [ln for ln in lines if ln["direction"] == "y"]
+        spec["wall_lines"] = xs[: max(1, n_lines // 2)] + ys[: max(1, n_lines - n_lines // 2)]
+    for breaker in RULE_BREAKERS:
+        if rng.random() < 0.25:
+            breaker(rng, spec)
+    return spec
+
+
+def _line_past_aspect_limit(rng: random.Random, spec: dict[str, Any]) -> None:
+    """Every segment of one line story taller than 3.5 x its length (SDPWS Table 4.3.4)."""
+    if not spec.get("wall_lines"):
+        return
+    story = rng.choice(rng.choice(spec["wall_lines"])["stories"])
+    for seg in story["segments"]:
+        seg["height_ft"] = min(2000.0, 3.6 * seg["length_ft"])
+
+
+def _two_lines_at_one_position(rng: random.Random, spec: dict[str, Any]) -> None:
+    lines = [ln for ln in spec.get("wall_lines", []) if ln["direction"] == "x"]
+    if len(lines) >= 2:
+        a, b = rng.sample(lines, 2)
+        b["position_ft"] = a["position_ft"]
+
+
+def _stack_onto_nothing(rng: random.Random, spec: dict[str, Any]) -> None:
+    """A stacked hold-down whose segment below got another id."""
+    for line in spec.get("wall_lines", []):
+        if len(line["stories"]) >= 2:
+            upper, lower = line["stories"][0], line["stories"][1]  # stories are listed top-down
+            upper["segments"][0]["hold_down_continues_below"] = True
+            lower["segments"][0]["id"] = "renamed"
+            return
+
+
+def _level_named_in(rng: random.Random, spec: dict[str, Any]) -> None:
+    """Level id 'in' (or 'IN'): its sheet Walls_in is the wall-input sheet's name."""
+    level = rng.choice(spec["building"]["levels"])
+    rename_level(spec, level["id"], rng.choice(("in", "IN")))
+
+
+RULE_BREAKERS = (
+    _line_past_aspect_limit,
+    _two_lines_at_one_position,
+    _stack_onto_nothing,
+    _level_named_in,
+)
 
 
 # --- ids -----------------------------------------------------------------------------------
@@ -375,6 +489,7 @@ def specs(
     max_levels: int = MAX_LEVELS,
     max_lines_per_dir: int = 30,
     long_ids: bool | None = False,
+    extreme: bool | None = False,
 ) -> dict[str, Any]:
     """A hypothesis strategy of valid specs; options are drawn, so they shrink first."""
     n_levels = draw(st.integers(min_levels, max_levels))
@@ -391,4 +506,5 @@ def specs(
         wind=wind,
         level_order=draw(st.sampled_from(("bottom_up", "top_down"))),
         long_ids=draw(st.booleans()) if long_ids is None else long_ids,
+        extreme=draw(st.booleans()) if extreme is None else extreme,
     )

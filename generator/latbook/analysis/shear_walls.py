@@ -237,29 +237,38 @@ def _deflection(out, base, g, src, V_seg, a: ShearWallAssembly) -> float:
     return delta
 
 
+GOVERNING_REL = 1e-9
+"""Values within this fraction of the largest (at least 1e-9 absolute) count as equal: the
+first of them governs. Two paths to one number (engine, spreadsheet) differ by a few
+rounding steps, far less than this, so both pick the same segment."""
+
+
+def near_largest(values: list[float | str]) -> tuple[float, list[int]]:
+    """The largest number among `values` (0 when none is a number, like a spreadsheet MAX)
+    and a flag per value: 1 where it is a number within GOVERNING_REL of the largest [-]."""
+    numeric = [v for v in values if not isinstance(v, str)]
+    top = max(numeric, default=0.0)
+    threshold = top - GOVERNING_REL * max(1.0, abs(top))
+    return top, [0 if isinstance(v, str) else int(v > threshold) for v in values]
+
+
 def _story_governing(out, story: StoryPlace, sources) -> None:
+    """Largest unit-shear DCR, hold-down tension and hold-down DCR of the story and the
+    first segment within GOVERNING_REL of each (the workbook's near-max flags and MATCH)."""
     lv = story.level.id
     segs = story.segments
     for src in sources:
-        for field, name in (("dcr", "dcr"), ("T", "T")):
+        for field in ("dcr", "T", "T_dcr"):
             values = [out[f"walls.{lv}.seg.{s.key}.{field}_{src}"] for s in segs]
-            i = values.index(max(values))
-            out[f"walls.{lv}.{name}_{src}_max"] = values[i]
-            out[f"walls.{lv}.{name}_{src}_gov"] = segment_label(segs[i])
-        _hold_down_governing(out, lv, segs, src)
-
-
-def _hold_down_governing(out, lv: str, segs: list[SegmentPlace], src: str) -> None:
-    """Largest hold-down DCR of the story among segments with a capacity (0 when none is
-    numeric, as the workbook's MAX), its segment, and the count left unchecked."""
-    values = [out[f"walls.{lv}.seg.{s.key}.T_dcr_{src}"] for s in segs]
-    numeric = [v for v in values if not isinstance(v, str)]
-    best = max(numeric, default=0.0)
-    out[f"walls.{lv}.T_dcr_{src}_max"] = best
-    out[f"walls.{lv}.T_dcr_{src}_gov"] = (
-        segment_label(segs[values.index(best)]) if numeric else "none with a capacity"
-    )
-    out[f"walls.{lv}.T_dcr_{src}_missing"] = len(values) - len(numeric)
+            top, flags = near_largest(values)
+            for seg, flag in zip(segs, flags, strict=True):
+                out[f"walls.{lv}.seg.{seg.key}.{field}_gov_{src}"] = flag
+            out[f"walls.{lv}.{field}_{src}_max"] = top
+            label = segment_label(segs[flags.index(1)]) if 1 in flags else "none with a capacity"
+            out[f"walls.{lv}.{field}_{src}_gov"] = label
+        out[f"walls.{lv}.T_dcr_{src}_missing"] = sum(
+            isinstance(out[f"walls.{lv}.seg.{s.key}.T_dcr_{src}"], str) for s in segs
+        )
 
 
 def segment_label(seg: SegmentPlace) -> str:

@@ -19,6 +19,10 @@ Segment = tuple[float, float]
 """A shear wall segment on the line as (start_ft, length_ft)."""
 
 _POSITION_TOLERANCE_FT = 1e-9
+ZERO_FORCE_REL = 1e-9
+"""|F| at most this fraction of |R| is taken as exactly 0: F is a difference of two terms
+of size R, so a zero (F(b), or a point where the walls have taken all of R) comes out as
+rounding noise of either sign. The workbook's formula applies the same rule."""
 
 
 def _validate(b_ft: float, segments: list[Segment]) -> list[Segment]:
@@ -61,15 +65,16 @@ def collector_breakpoints(b_ft: float, segments: list[Segment]) -> list[float]:
 
 def collector_force_at_lb(b_ft: float, R_lb: float, segments: list[Segment], s_ft: float) -> float:
     """Collector force F(s) = v_d s - v_w (wall length in [0, s]), sign as in the module doc,
-    ASCE 7-16 §12.10.2 [lb]."""
+    0 where |F| <= ZERO_FORCE_REL |R| (rounding noise), ASCE 7-16 §12.10.2 [lb]."""
     ordered = _validate(b_ft, segments)
     if s_ft < -_POSITION_TOLERANCE_FT or s_ft > b_ft + _POSITION_TOLERANCE_FT:
         raise ValueError("s_ft must lie within [0, b_ft]")
     diaphragm_unit_shear_plf = R_lb / b_ft
     wall_unit_shear_plf = R_lb / sum(length_ft for _, length_ft in ordered)
-    return diaphragm_unit_shear_plf * s_ft - wall_unit_shear_plf * _wall_length_within_ft(
+    force_lb = diaphragm_unit_shear_plf * s_ft - wall_unit_shear_plf * _wall_length_within_ft(
         ordered, s_ft
     )
+    return force_lb if abs(force_lb) > ZERO_FORCE_REL * abs(R_lb) else 0.0
 
 
 def collector_forces(

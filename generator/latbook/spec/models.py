@@ -8,7 +8,9 @@ from __future__ import annotations
 
 from typing import Annotated, Literal
 
-from pydantic import BaseModel, ConfigDict, Field, model_validator
+from pydantic import AfterValidator, BaseModel, BeforeValidator, ConfigDict, Field, model_validator
+
+from latbook.spec.text_rules import not_a_boolean, storable_text
 
 MAX_LEVELS = 12
 MAX_WALL_LINES = 80
@@ -26,13 +28,21 @@ Identifier = Annotated[
         description="Short id: letters, digits, '_' or '-', starting with a letter or digit.",
     ),
 ]
-Text = Annotated[str, Field(max_length=MAX_TEXT)]
+Text = Annotated[
+    str,
+    Field(
+        max_length=MAX_TEXT,
+        description="Free text; no control characters other than tab and line feed.",
+    ),
+    AfterValidator(storable_text),
+]
 PositiveFt = Annotated[float, Field(gt=0, le=2000)]
 Coordinate = Annotated[float, Field(ge=-5000, le=5000)]
 
 
 class _Strict(BaseModel):
-    model_config = ConfigDict(extra="forbid", frozen=True)
+    # allow_inf_nan=False: NaN and Infinity are reported as "not a finite number"
+    model_config = ConfigDict(extra="forbid", frozen=True, allow_inf_nan=False)
 
 
 class Project(_Strict):
@@ -138,7 +148,10 @@ class Seismic(_Strict):
     T_computed_s: Annotated[float, Field(gt=0, le=10)] | None = Field(
         None, description="Period from a substantiated analysis; capped at Cu Ta."
     )
-    rho: Literal[1.0, 1.3] = Field(1.0, description="Redundancy factor, ASCE 7-16 §12.3.4.")
+    # a JSON true equals 1.0 in Python: refused before the literal check
+    rho: Annotated[Literal[1.0, 1.3], BeforeValidator(not_a_boolean)] = Field(
+        1.0, description="Redundancy factor, ASCE 7-16 §12.3.4."
+    )
     collector_light_frame_exception: bool = Field(
         False,
         description="True: the structure is braced entirely by light-frame shear walls and "
@@ -264,9 +277,11 @@ class DriftLimits(_Strict):
 class Spec(_Strict):
     """A latbook project spec."""
 
-    model_config = ConfigDict(extra="forbid", frozen=True, populate_by_name=True)
+    model_config = ConfigDict(
+        extra="forbid", frozen=True, populate_by_name=True, allow_inf_nan=False
+    )
 
-    schema_ref: str | None = Field(None, alias="$schema", description="Editor hint; ignored.")
+    schema_ref: Text | None = Field(None, alias="$schema", description="Editor hint; ignored.")
     project: Project
     code: CodeBasis = CodeBasis()
     design_method: Literal["ASD", "LRFD"]

@@ -4,21 +4,30 @@ from __future__ import annotations
 
 from collections.abc import Iterator
 
+from latbook.engine.sdpws import shear_wall
 from latbook.problems import Problem, json_path
 from latbook.spec.models import Level, Spec, WallLine
+from latbook.spec.plan_geometry import DIRECTIONS, POSITION_TOLERANCE_FT, resisting_lines
+from latbook.spec.wall_stories import stacking_gaps
 
 _EPS_FT = 1e-6
 
 
 def check_rules(spec: Spec) -> list[Problem]:
-    """Every cross-field problem in `spec`, in document order."""
-    return [
+    """Every cross-field problem in `spec`, in document order. The rules on the walls story
+    by story (stacking, line positions, aspect ratios) read story heights and the story
+    below each story, so they run once every other rule holds."""
+    problems = [
         *_levels(spec),
+        *_sheet_names(spec),
         *_assembly_ids(spec),
         *_wall_lines(spec),
         *_wind(spec),
         *_seismic(spec),
     ]
+    if problems or not spec.wall_lines:
+        return problems
+    return [*_stacking(spec), *_distinct_positions(spec), *_some_segment_qualifies(spec)]
 
 
 def _levels(spec: Spec) -> Iterator[Problem]:
@@ -59,6 +68,30 @@ def _levels(spec: Spec) -> Iterator[Problem]:
                 "required",
                 "a level with wall lines below needs a diaphragm assembly",
             )
+
+
+def _sheet_names(spec: Spec) -> Iterator[Problem]:
+    """A level id names sheets (`Walls_<level>`...); none may equal another sheet's name
+    ignoring case."""
+    from latbook.workbook.sheet_names import level_sheet_names, other_sheet_names
+
+    taken = {name.lower(): name for name in other_sheet_names()}
+    ids: set[str] = set()
+    for i, level in enumerate(spec.building.levels):
+        if level.id.lower() in ids:
+            continue  # a duplicate id: reported by the level rules
+        ids.add(level.id.lower())
+        for name in sorted(level_sheet_names(level.id)):
+            if name.lower() in taken:
+                yield Problem(
+                    json_path(("building", "levels", i, "id")),
+                    "sheet_name",
+                    f"level id '{level.id}' would name a sheet '{name}', which the workbook "
+                    f"already has ('{taken[name.lower()]}'); choose another id",
+                )
+                break
+        for name in level_sheet_names(level.id):
+            taken.setdefault(name.lower(), name)
 
 
 def _assembly_ids(spec: Spec) -> Iterator[Problem]:
@@ -103,6 +136,65 @@ def _wall_lines(spec: Spec) -> Iterator[Problem]:
             yield from _line_story(line, level, story, spath, walls)
         yield from _line_continuity(line, story_levels, order, base)
     yield from _two_lines_each_way(spec)
+
+
+def _stacking(spec: Spec) -> Iterator[Problem]:
+    """A stacked hold-down needs a segment of the same id below it (its force goes there)."""
+    for gap in stacking_gaps(spec):
+        path = ("wall_lines", gap.line_index, "stories", gap.story_index)
+        yield Problem(
+            json_path((*path, "segments", gap.segment_index, "hold_down_continues_below")),
+            "stacking",
+            gap.message,
+        )
+
+
+def _distinct_positions(spec: Spec) -> Iterator[Problem]:
+    """Two lines of one direction bearing on the same diaphragm cannot share a position
+    (the diaphragm spans between distinct lines, ASCE 7-16 §12.3.1.1)."""
+    reported: set[int] = set()
+    for level in spec.building.levels:
+        for direction in DIRECTIONS:
+            lines = resisting_lines(spec, level.id, direction)
+            for a, b in zip(lines, lines[1:], strict=False):
+                if b.position_ft - a.position_ft > POSITION_TOLERANCE_FT:
+                    continue
+                if b.line_index in reported:
+                    continue
+                reported.add(b.line_index)
+                yield Problem(
+                    json_path(("wall_lines", b.line_index, "position_ft")),
+                    "distinct_position",
+                    f"lines '{a.id}' and '{b.id}' ({direction}-direction) are both at "
+                    f"{b.position_ft:g} ft with walls below level '{level.id}'; merge them into "
+                    "one line or move one",
+                )
+
+
+def _some_segment_qualifies(spec: Spec) -> Iterator[Problem]:
+    """A line story carries shear only through segments within the aspect-ratio limit."""
+    ordered = sorted(spec.building.levels, key=lambda lv: lv.elevation_ft)
+    base_ft = {lv.id: (ordered[i - 1].elevation_ft if i else 0.0) for i, lv in enumerate(ordered)}
+    elevation = {lv.id: lv.elevation_ft for lv in ordered}
+    limit = shear_wall.ASPECT_RATIO_LIMIT_WSP
+    for li, line in enumerate(spec.wall_lines):
+        for si, story in enumerate(line.stories):
+            if not story.segments:
+                continue
+            story_ft = elevation[story.level] - base_ft[story.level]
+            heights = [story_ft if s.height_ft is None else s.height_ft for s in story.segments]
+            if any(
+                shear_wall.meets_aspect_ratio_limit_wsp(h, seg.length_ft)
+                for h, seg in zip(heights, story.segments, strict=True)
+            ):
+                continue
+            yield Problem(
+                json_path(("wall_lines", li, "stories", si, "segments")),
+                "aspect_ratio",
+                f"no segment of line '{line.id}' in the story below level '{story.level}' meets "
+                f"h/bs <= {limit:g} (AWC SDPWS-2015 Table 4.3.4): the line has no shear wall "
+                "to resist its load; lengthen a segment or lower its height",
+            )
 
 
 def _line_story(line, level, story, spath, walls) -> Iterator[Problem]:

@@ -114,18 +114,44 @@ def wall_stories(spec: Spec) -> list[StoryPlace]:
     return stories
 
 
-def _check_stacking(spec, below_of, story_of) -> None:
-    for line in spec.wall_lines:
-        for story in line.stories:
+@dataclass(frozen=True)
+class StackGap:
+    """A segment that stacks its hold-down onto a story below without a segment to land on."""
+
+    line_index: int
+    story_index: int
+    segment_index: int
+    message: str
+
+
+def stacking_gaps(spec: Spec) -> list[StackGap]:
+    """Every stacked hold-down with no segment of the same id on the same line in the story
+    below (a spec rule; `wall_stories` refuses the same cases)."""
+    levels = levels_top_down(spec)
+    below_of = {
+        lv.id: (levels[i + 1] if i + 1 < len(levels) else None) for i, lv in enumerate(levels)
+    }
+    gaps: list[StackGap] = []
+    for li, line in enumerate(spec.wall_lines):
+        stories = {story.level: story for story in line.stories}
+        for si, story in enumerate(line.stories):
             below = below_of.get(story.level)
             if below is None:
                 continue  # the lowest story bears on the foundation: nothing below to stack on
-            found = story_of.get((line.id, below.id))
-            ids_below = {s.id for s in found[1].segments} if found else set()
-            for seg in story.segments:
+            found = stories.get(below.id)
+            ids_below = {s.id for s in found.segments} if found else set()
+            for gi, seg in enumerate(story.segments):
                 if seg.hold_down_continues_below and seg.id not in ids_below:
-                    raise WallStackError(
-                        f"line '{line.id}', story below level '{story.level}': segment "
-                        f"'{seg.id}' stacks its hold-downs onto the story below, which has no "
-                        f"segment '{seg.id}' on this line (give the segment below the same id)"
+                    message = (
+                        f"segment '{seg.id}' stacks its hold-downs onto the story below level "
+                        f"'{below.id}', which has no segment '{seg.id}' on line '{line.id}' "
+                        "(give the segment below the same id, or set this to false)"
                     )
+                    gaps.append(StackGap(li, si, gi, message))
+    return gaps
+
+
+def _check_stacking(spec, below_of, story_of) -> None:
+    gaps = stacking_gaps(spec)
+    if gaps:
+        raise WallStackError(gaps[0].message)

@@ -10,8 +10,8 @@ import contextlib
 import datetime as dt
 import gc
 import json
-import os
-import tempfile
+import types
+import zipfile
 from collections.abc import Iterator, Mapping
 from pathlib import Path
 from typing import Any
@@ -20,19 +20,21 @@ import xlsxwriter
 from xlsxwriter.worksheet import Worksheet
 
 from latbook import __version__
+from latbook.atomic_file import atomic_output
+from latbook.spec.limits import FieldLimits
 from latbook.spec.models import Spec
 from latbook.workbook.cautions import CAUTION_SHORT
 from latbook.workbook.context import build_context
 from latbook.workbook.cover import COVER_SHEET, write_cover
 from latbook.workbook.index_sheet import INDEX_SHEET, write_index
 from latbook.workbook.layout import COL_CLAUSE, Cell, SheetPlan, plan_sheets
-from latbook.workbook.registry import Registry
+from latbook.workbook.registry import Registry, a1
 from latbook.workbook.rendered import cell_formula
+from latbook.workbook.sheet_names import SPEC_SHEET
 from latbook.workbook.styles import Styles
 from latbook.workbook.tables_sheet import TABLES_SHEET, write_tables
 from latbook.workbook.templates import all_templates, reference_tables
 
-SPEC_SHEET = "SpecData"
 SPEC_CHUNK = 30000
 FIXED_TIMESTAMP = dt.datetime(2000, 1, 1, 0, 0, 0)
 SCALAR_WIDTHS = {0: 46, 1: 10, 2: 14, 3: 10, 4: 34}
@@ -89,24 +91,9 @@ def _write_workbook(spec, results, path, spec_json, spec_sha256, protect) -> Reg
     missing = [e.id for e in registry.calcs() if e.id not in results]
     if missing:
         raise BuildError(f"the engine has no value for {len(missing)} cells, e.g. {missing[:5]}")
-    path = Path(path)
-    fd, tmp = tempfile.mkstemp(prefix=f".{path.name}.", suffix=".tmp", dir=path.parent or ".")
-    os.close(fd)
-    try:
-        os.chmod(tmp, _new_file_mode())  # mkstemp makes 0600; a workbook is a shared document
-        _write(spec, results, plans, registry, Path(tmp), spec_json, spec_sha256, protect)
-        os.replace(tmp, path)
-    except BaseException:
-        Path(tmp).unlink(missing_ok=True)
-        raise
+    with atomic_output(Path(path)) as tmp:
+        _write(spec, results, plans, registry, tmp, spec_json, spec_sha256, protect)
     return registry
-
-
-def _new_file_mode() -> int:
-    """0666 less the process umask: the mode open() would give a new file."""
-    umask = os.umask(0)
-    os.umask(umask)
-    return 0o666 & ~umask
 
 
 def _write(spec, results, plans, registry, tmp, spec_json, spec_sha256, protect) -> None:
@@ -158,7 +145,31 @@ def _write(spec, results, plans, registry, tmp, spec_json, spec_sha256, protect)
     _write_spec_data(data, spec_json, spec_sha256, styles)
     data.hide()
     data.protect()
-    wb.close()
+    try:
+        wb.close()
+    except BaseException as exc:
+        _drop_open_archives(exc)
+        raise
+
+
+def _drop_open_archives(exc: BaseException) -> None:
+    """A save that failed part way (disk full, file-size limit) leaves xlsxwriter's zip
+    archive open in the failing frames; closing it later, at garbage collection, fails again
+    and prints a traceback. Close its file now, ignoring the error already reported."""
+    chain: list[BaseException] = []
+    while exc is not None and exc not in chain:
+        chain.append(exc)
+        inner = [a for a in exc.args if isinstance(a, BaseException)]
+        exc = exc.__cause__ or exc.__context__ or (inner[0] if inner else None)
+    for link in chain:
+        tb: types.TracebackType | None = link.__traceback__
+        while tb is not None:
+            for value in list(tb.tb_frame.f_locals.values()):
+                if isinstance(value, zipfile.ZipFile) and value.fp is not None:
+                    with contextlib.suppress(OSError):
+                        value.fp.close()
+                    value.fp = None
+            tb = tb.tb_next
 
 
 def _write_plan(ws: Worksheet, plan: SheetPlan, registry: Registry, results, styles) -> None:
@@ -230,20 +241,35 @@ def _write_input(ws: Worksheet, cell: Cell, fmt) -> None:
         ws.write_number(cell.row, cell.col, value, fmt)
     else:
         ws.write_string(cell.row, cell.col, "" if value is None else str(value), fmt)
-    v = cell.validation
-    if not v:
-        return
-    if "choices" in v:
-        rule = {"validate": "list", "source": [str(c) for c in v["choices"]]}
+    if cell.limits is not None:
+        rule = data_validation(cell.limits, a1(cell.row, cell.col))
+        if rule is not None:
+            ws.data_validation(cell.row, cell.col, cell.row, cell.col, rule)
+
+
+def data_validation(limits: FieldLimits, address: str) -> dict[str, Any] | None:
+    """The xlsxwriter data-validation rule of an input cell at `address`: the spec's own
+    limits (`latbook.spec.limits`), an exclusive bound as a custom formula."""
+    if limits.choices is not None:
+        rule: dict[str, Any] = {"validate": "list", "source": [str(c) for c in limits.choices]}
+    elif limits.minimum is None and limits.maximum is None:
+        return None
+    elif limits.min_exclusive or limits.max_exclusive:
+        tests = [f"ISNUMBER({address})"]
+        if limits.minimum is not None:
+            tests.append(f"{address}{'>' if limits.min_exclusive else '>='}{limits.minimum!r}")
+        if limits.maximum is not None:
+            tests.append(f"{address}{'<' if limits.max_exclusive else '<='}{limits.maximum!r}")
+        rule = {"validate": "custom", "value": f"=AND({','.join(tests)})"}
     else:
         rule = {
             "validate": "decimal",
             "criteria": "between",
-            "minimum": v.get("min", -1e12),
-            "maximum": v.get("max", 1e12),
+            "minimum": -1e12 if limits.minimum is None else limits.minimum,
+            "maximum": 1e12 if limits.maximum is None else limits.maximum,
         }
-    rule["error_message"] = v.get("message", "Value outside the range this input allows.")
-    ws.data_validation(cell.row, cell.col, cell.row, cell.col, rule)
+    rule["error_message"] = f"Allowed: {limits.describe()}."
+    return rule
 
 
 def _page_header(spec: Spec) -> tuple[str, str]:

@@ -9,6 +9,7 @@ from __future__ import annotations
 from dataclasses import dataclass, field
 from typing import Any
 
+from latbook.spec.limits import FieldLimits, field_limits
 from latbook.workbook.context import Context
 from latbook.workbook.formula import ctx_fields, substitute_ctx
 from latbook.workbook.registry import Entry, Registry, TablePos
@@ -33,7 +34,7 @@ class Cell:
     ctx: dict[str, Any] = field(default_factory=dict)
     table: str | None = None
     fmt: str | None = None
-    validation: dict[str, Any] | None = None
+    limits: FieldLimits | None = None  # an input's allowed range or values
 
 
 @dataclass
@@ -166,7 +167,7 @@ def _place_scalar_row(
         path = substitute_ctx(r.input, ctx)
         value_cell.style = "input"
         value_cell.value = spec_value(context.spec_data, path)
-        value_cell.validation = r.validation
+        value_cell.limits = field_limits(path)
         _register_input(registry, qid, plan.name, row, COL_VALUE, label, r, name, path)
     elif r.formula is not None:
         value_cell.style = "result" if r.key else "calc"
@@ -230,7 +231,7 @@ def _table_cell(
         path = substitute_ctx(col.input, ctx)
         cell.style = "input"
         cell.value = spec_value(context.spec_data, path)
-        cell.validation = col.validation
+        cell.limits = field_limits(path)
         _register_input(registry, qid, plan.name, row, c, label, col, None, path, table)
     elif col.formula is not None:
         cell.formula = pick_variant(col.formula, ctx)
@@ -260,8 +261,6 @@ def _register_calc(registry, qid, sheet, row, col, label, unit, clause, name, ta
 def _register_input(registry, qid, sheet, row, col, label, tpl, name, path, table=None) -> None:
     if qid is None:
         raise ValueError(f"an input cell on {sheet} has no quantity id ('{label}')")
-    v = tpl.validation or {}
-    choices = tuple(v["choices"]) if "choices" in v else None
     registry.add(
         Entry(
             qid,
@@ -274,10 +273,8 @@ def _register_input(registry, qid, sheet, row, col, label, tpl, name, path, tabl
             tpl.clause,
             name,
             path,
-            choices,
-            v.get("min"),
-            v.get("max"),
-            table,
+            table=table,
+            limits=field_limits(path),
         )
     )
 

@@ -7,6 +7,8 @@ from functools import lru_cache
 
 from xlsxwriter.utility import xl_rowcol_to_cell
 
+from latbook.spec.limits import FieldLimits
+
 
 @lru_cache(maxsize=1 << 16)
 def a1(row: int, col: int, absolute: bool = False) -> str:
@@ -28,10 +30,8 @@ class Entry:
     clause: str = ""
     name: str | None = None
     spec_path: str | None = None
-    choices: tuple[str, ...] | None = None
-    minimum: float | None = None
-    maximum: float | None = None
     table: str | None = None
+    limits: FieldLimits | None = None  # an input's allowed range or values (spec models)
 
     @property
     def address(self) -> str:

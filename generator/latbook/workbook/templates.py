@@ -4,6 +4,8 @@ A sheet template lists blocks; a block is a list of scalar rows, a table over a
 collection of rows, a note, or a chart (`kind = "chart"` with a `[blocks.chart]` table:
 series drawn from a table's columns by field name; keys in
 `latbook.workbook.layout._place_chart`). Formulas are patterns: see `latbook.workbook.formula`.
+An input's allowed range or values are not written here: they come from the spec models
+(`latbook.spec.limits`), so the schema, the workbook and `verify` share one set.
 """
 
 from __future__ import annotations
@@ -33,7 +35,6 @@ class Row:
     when: str | None = None
     fmt: str | None = None
     key: bool = False
-    validation: dict[str, Any] | None = None
 
 
 @dataclass(frozen=True)
@@ -51,7 +52,6 @@ class Column:
     when: str | None = None
     fmt: str | None = None
     width: float | None = None
-    validation: dict[str, Any] | None = None
 
 
 @dataclass(frozen=True)
