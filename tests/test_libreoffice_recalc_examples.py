@@ -26,7 +26,7 @@ from tests.helpers.specgen import make_spec
 EXAMPLES = sorted(Path(__file__).resolve().parents[1].glob("out_examples/*/spec.json"))
 
 # Small generated buildings that switch on the rows the examples may not reach
-# (direct ground motion, wind only, LRFD, a computed period).
+# (direct ground motion, wind only, LRFD, a computed period, extreme values).
 GENERATED = {
     "gen_direct_lrfd": dict(
         seed=11, n_levels=2, n_lines_per_dir=2, seismic="direct", design_method="LRFD", wind=False
@@ -35,6 +35,10 @@ GENERATED = {
         seed=12, n_levels=3, n_lines_per_dir=2, seismic="site_class", design_method="ASD", wind=True
     ),
     "gen_wind_only": dict(seed=13, n_levels=2, n_lines_per_dir=2, seismic=None, wind=True),
+    # weights far from 1 kip, 17-digit inputs, level ids equal to sheet-name parts
+    "gen_extreme": dict(
+        seed=31, n_levels=2, n_lines_per_dir=2, seismic="site_class", wind=True, extreme=True
+    ),
 }
 
 VOLATILE = {"NOW", "TODAY", "RAND", "RANDBETWEEN", "OFFSET", "INDIRECT", "CELL", "INFO"}
