@@ -61,6 +61,16 @@ CASES = [
     ("seismic.rho", 1.1, "$.seismic.rho", "literal_error"),
     ("project.name", _DELETE, "$.project.name", "missing"),
     ("building.levels.0.colour", "red", "$.building.levels[0].colour", "extra_forbidden"),
+    # a case choice the building does not allow: the demo has 3 stories (App. D, D1.1)
+    ("wind.torsional_load_cases", "cases_1_and_3", "$.wind.torsional_load_cases", "appendix_d"),
+    (
+        "wall_lines.0.stories.0.segments.0.roof_bearing_width_ft",
+        -5.0,
+        "$.wall_lines[0].stories[0].segments[0].roof_bearing_width_ft",
+        "greater_than_equal",
+    ),
+    ("wind.enclosure", "open", "$.wind.enclosure", "literal_error"),
+    ("wind.roof_slope_deg", 20.0, "$.wind.roof_slope_deg", "less_than_equal"),
 ]
 
 
@@ -80,6 +90,20 @@ def test_refused_with_path_and_rule(path, value, where, rule, tmp_path, capsys):
     assert where in err
     assert f"[{rule}]" in err
     assert "Traceback" not in err
+    assert out.read_bytes() == SENTINEL
+
+
+def test_omega0_reduction_needs_omega0_of_2_5(tmp_path, capsys):
+    # ASCE 7-16 Table 12.2-1 note g (from memory): only where the tabulated Ω0 is 2.5 or more
+    data = _set(
+        _set(demo(), "seismic.system.Omega0", 2.0),
+        "seismic.omega0_flexible_diaphragm_reduction",
+        True,
+    )
+    code, err, out = run_build(data, tmp_path, capsys)
+    assert code == 2
+    assert "$.seismic.omega0_flexible_diaphragm_reduction" in err
+    assert "[table_12_2_1_note_g]" in err
     assert out.read_bytes() == SENTINEL
 
 

@@ -30,6 +30,7 @@ FACTORS_ASD = {
     "combo.Fac_Em": 0.7 * 2.5,
     "combo.Fac_W": 0.6,
     "combo.seismic_additive": "seismic comb.",
+    "combo.seismic_additive_dia": "seismic comb., rho 1.0",
     "combo.overstrength_additive": "overstrength comb.",
     "combo.wind_additive": "wind comb.",
 }
@@ -108,6 +109,7 @@ def run(
     Fpx_kip,
     Fpx_eq_kip=None,
     Fpx_min_kip=0.0,
+    Fpx_max_kip=1.0e6,
     F_wind_kip=None,
     sdc="D",
     factors=FACTORS_ASD,
@@ -118,8 +120,10 @@ def run(
     out[f"{base}.Fx"], out[f"{base}.Fpx"] = Fx_kip, Fpx_kip
     out[f"{base}.Fpx_eq"] = Fpx_kip if Fpx_eq_kip is None else Fpx_eq_kip
     out[f"{base}.Fpx_min"] = Fpx_min_kip
+    out[f"{base}.Fpx_max"] = Fpx_max_kip  # large: Exception 2 of §12.10.2.1 does not cap
     for d in ("x", "y"):
         out[f"wind.{d}.level.RF.F_level"] = F_wind_kip if F_wind_kip is not None else Fx_kip
+        out[f"wind.{d}.level.RF.F_min"] = 0.0  # the minimum case does not govern here
     diaphragm_results(spec, out)
     return out
 
@@ -162,7 +166,8 @@ def test_chord_force_is_moment_over_depth():
     assert out["diaph.RF.x.span.1.T_fpx_lb"] == pytest.approx(6_250.0, rel=1e-9)
     assert out["diaph.RF.x.chord_max_lb"] == pytest.approx(4_375.0, rel=1e-9)
     assert out["diaph.RF.x.chord_dcr_max"] == pytest.approx(0.4375, rel=1e-9)
-    assert out["diaph.RF.x.chord_source"] == "seismic comb."
+    # chords from F_px take the rho = 1.0 combination (ASCE 7-16 §12.3.4.1), named as such
+    assert out["diaph.RF.x.chord_source"] == "seismic comb., rho 1.0"
 
 
 def test_symmetric_end_walls_each_take_half():
@@ -234,6 +239,8 @@ def test_cantilever_overhang_goes_to_the_last_line():
     # Statics (derived by hand): lines at y = 0 and 60 of a 80 ft plan, w = 100 plf:
     # simple span 60 ft -> 3,000 lb each; overhang 20 ft -> 2,000 lb more to the line at 60;
     # overhang moment wL^2/2 = 20,000 lb-ft; chord 20,000 / 40 = 500 lb, tension on x_min.
+    # The diaphragm is continuous over line M (SDPWS-2015 §4.2.5.2 cantilever), so the
+    # overhang moment moves 20,000 / 60 = 333.3 lb from line S to line M (was ignored before).
     spec = one_level_spec(
         40.0,
         80.0,
@@ -241,8 +248,13 @@ def test_cantilever_overhang_goes_to_the_last_line():
         y_lines=[("W", 0.0, [(0.0, 80.0)]), ("E", 40.0, [(0.0, 80.0)])],
     )
     out = run(spec, Fx_kip=8.0, Fpx_kip=8.0)
-    assert out["diaph.RF.x.line.S.R_seis"] == pytest.approx(3_000.0, rel=1e-9)
-    assert out["diaph.RF.x.line.M.R_seis"] == pytest.approx(5_000.0, rel=1e-9)
+    assert out["diaph.RF.x.line.S.R_seis"] == pytest.approx(3_000.0 - 20_000.0 / 60, rel=1e-9)
+    assert out["diaph.RF.x.line.M.R_seis"] == pytest.approx(5_000.0 + 20_000.0 / 60, rel=1e-9)
+    # span 1 with the hogging moment at M: zero shear at 30 - 333.3/100 = 26.67 ft
+    xs = 30.0 - 20_000.0 / 60 / 100.0
+    M_sag = 100.0 * (26.0 + 2.0 / 3.0) ** 2 / 2.0
+    assert out["diaph.RF.x.span.1.xs_unit_ft"] == pytest.approx(xs, rel=1e-9)
+    assert out["diaph.RF.x.span.1.M_fpx_lbft"] == pytest.approx(max(M_sag, 20_000.0), rel=1e-9)
     assert out["diaph.RF.x.span.2.M_fpx_lbft"] == pytest.approx(20_000.0, rel=1e-9)
     assert out["diaph.RF.x.span.2.T_fpx_lb"] == pytest.approx(500.0, rel=1e-9)
     assert out["diaph.RF.x.span.2.V_fpx_lb"] == pytest.approx(2_000.0, rel=1e-9)

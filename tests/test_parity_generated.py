@@ -32,13 +32,15 @@ REPEATABLE = settings(
 )
 
 # (seed, levels, lines per direction, seismic, wind, design method): both methods, both
-# ground-motion inputs, wind on and off, wind alone, one level and two. One level with two
+# ground-motion inputs, wind on and off, wind alone, one level, two and three. One level with two
 # lines each way is already ~500-800 formula cells (~20 ms each to recompute).
 FIXED_CASES = [
     (11, 1, 2, "site_class", False, "ASD"),
     (12, 1, 2, "direct", True, "LRFD"),
     (13, 1, 2, None, True, "ASD"),
     (14, 2, 2, "site_class", True, "LRFD"),
+    # three stories: the torsional wind cases apply (App. D); partially open; overhangs above
+    (56, 3, 2, "site_class", True, "ASD"),
 ]
 
 

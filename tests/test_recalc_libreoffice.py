@@ -82,6 +82,9 @@ CHECK_ROWS: list[tuple[str, str, object]] = [
     ("not equal", "=S_DS<>1", False),
     ("greater or equal", "=W_seis>=500", True),
     ("text join", '="R="&6.5', "R=6.5"),
+    # TEXT with the one format the workbook uses (a factor in a combination's name)
+    ("TEXT 0.0# rounds", '=TEXT(2.999999999999997,"0.0#")', "3.0"),
+    ("TEXT 0.0# keeps two", '=TEXT(2.25,"0.0#")', "2.25"),
     ("percent", "=50%*W_seis", 0.5 * W_SEIS_KIP),
 ]
 

@@ -95,36 +95,50 @@ def demo(tmp_path_factory) -> BuildResult:
 
 @pytest.mark.parametrize("direction", ["x", "y"])
 def test_level_forces_scale_with_V_squared(demo, direction, tmp_path):
-    # ASCE 7-16 Eq. 26.10-1: q_z is proportional to V^2, so every pressure-governed level
-    # force (parapet included, Eq. 27.3-3) scales by (V_new/V_old)^2 = (150/110)^2 = 1.8595.
+    # ASCE 7-16 Eq. 26.10-1: q_z is proportional to V^2, so every level force of the computed
+    # pressure case (parapet included, Eq. 27.3-3) scales by (V_new/V_old)^2 = (150/110)^2.
+    # The §27.1.5 minimum is a load case of its own, so nothing is mixed in at any speed.
     values = _edit_and_recompute(demo, {"wind.V_mph": 150.0}, tmp_path)
     ratio = (150.0 / 110.0) ** 2
     for level in ("RF", "L3", "L2"):
         base = f"wind.{direction}.level.{level}"
-        assert demo.results[f"{base}.governs"] == "pressure"
-        assert _value(demo, values, f"{base}.governs") == "pressure"
         got = _value(demo, values, f"{base}.F_level")
         assert got == pytest.approx(demo.results[f"{base}.F_level"] * ratio, rel=1e-9)
+        # the minimum case does not depend on V
+        assert _value(demo, values, f"{base}.F_min") == pytest.approx(
+            demo.results[f"{base}.F_min"], rel=1e-12
+        )
 
 
-def test_16_psf_minimum_governs_every_band_at_85_mph(demo, tmp_path):
-    # ASCE 7-16 §27.1.5: not less than 16 psf on the projected wall area. Wind in x, B = 42 ft;
-    # bands (hand): RF 26.25-34 ft (7.75 ft) -> 16 x 7.75 x 42 / 1000 = 5.208 kip; L3 15.75-26.25
-    # and L2 5.25-15.75 ft (10.5 ft) -> 16 x 10.5 x 42 / 1000 = 7.056 kip. At 85 mph the pressure
-    # forces are 0.597 of those at 110 mph (8.55, 11.18, 10.43 kip -> 5.11, 6.68, 6.23 kip), all
-    # below the minimum. The parapet force still scales with V^2 and is added at the roof.
+def test_16_psf_minimum_is_its_own_load_case_at_85_mph(demo, tmp_path):
+    # ASCE 7-16 §27.1.5: not less than 16 psf on the wall area and 8 psf on the roof projected on a
+    # vertical plane, as a separate load case. Wind in x, B = 42 ft; bands (hand): RF 26.25-34 ft
+    # (7.75 ft) plus the 2.5 ft parapet as wall area -> 16 x 10.25 x 42 / 1000 = 6.888 kip; L3 and
+    # L2 (10.5 ft) -> 16 x 10.5 x 42 / 1000 = 7.056 kip. At 85 mph the computed forces are
+    # (85/110)^2 of those at 110 mph and are never replaced band by band.
     values = _edit_and_recompute(demo, {"wind.V_mph": 85.0}, tmp_path)
     ratio = (85.0 / 110.0) ** 2
-    for level, minimum_kip in (("RF", 5.208), ("L3", 7.056), ("L2", 7.056)):
+    for level, minimum_kip in (("RF", 6.888), ("L3", 7.056), ("L2", 7.056)):
         base = f"wind.x.level.{level}"
-        assert demo.results[f"{base}.governs"] == "pressure"  # at 110 mph
-        assert _value(demo, values, f"{base}.governs") == "16 psf minimum"
-        assert _value(demo, values, f"{base}.F_design") == pytest.approx(minimum_kip, rel=1e-9)
-    parapet_kip = demo.results["wind.x.parapet_F_kip"] * ratio
-    F_roof = _value(demo, values, "wind.x.level.RF.F_level")
-    assert F_roof == pytest.approx(5.208 + parapet_kip, rel=1e-9)
-    V_base = _value(demo, values, "wind.x.V_base_kip")
-    assert V_base == pytest.approx(5.208 + 2 * 7.056 + parapet_kip, rel=1e-9)
+        assert _value(demo, values, f"{base}.F_min") == pytest.approx(minimum_kip, rel=1e-9)
+        got = _value(demo, values, f"{base}.F_level")
+        assert got == pytest.approx(demo.results[f"{base}.F_level"] * ratio, rel=1e-9)
+    V_min = _value(demo, values, "wind.x.V_base_min_kip")
+    assert V_min == pytest.approx(6.888 + 2 * 7.056, rel=1e-9)
+    V = _value(demo, values, "wind.x.V_base_kip")
+    expected = "computed pressures" if V_min <= V else "§27.1.5 minimum"
+    assert _value(demo, values, "wind.x.base_case") == expected
+
+
+def test_roof_projection_loads_the_minimum_case(demo, tmp_path):
+    # §27.1.5 (from memory): 8 psf on the roof projected on a vertical plane; a 4 ft projection
+    # above h on the 42 ft width adds 8 x 4 x 42 / 1000 = 1.344 kip at the roof, moment arm
+    # h + 4/2 = 36 ft (derived)
+    values = _edit_and_recompute(demo, {"wind.roof_projection_above_h_ft": 4.0}, tmp_path)
+    F = _value(demo, values, "wind.x.level.RF.F_min")
+    assert pytest.approx(demo.results["wind.x.level.RF.F_min"] + 1.344, rel=1e-9) == F
+    M = _value(demo, values, "wind.x.M_base_min_kipft")
+    assert pytest.approx(demo.results["wind.x.M_base_min_kipft"] + 1.344 * 36.0, rel=1e-9) == M
 
 
 # --- the workbook's Kz against ASCE 7-16 Table 26.10-1 --------------------------------------

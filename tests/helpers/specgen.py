@@ -332,6 +332,12 @@ def _wall_lines(rng, direction, n_lines, levels, plan, wall_ids, ids: _IdMaker) 
     step = (hi - lo) / (n_lines - 1)
     positions = [_r(lo + i * step, 3) for i in range(n_lines)]
     positions[-1] = hi  # exactly on the plan edge, not past it by rounding
+    # A side stream (existing seeds keep their specs): some diaphragms overhang an outer line.
+    side = random.Random(f"overhang|{direction}|{lo}|{hi}|{n_lines}")
+    if side.random() < 0.3:
+        positions[0] = _r(lo + side.uniform(0.05, 0.3) * step, 3)
+    if side.random() < 0.3:
+        positions[-1] = _r(hi - side.uniform(0.05, 0.3) * step, 3)
     prefix = "X" if direction == "x" else "Y"
     lines = []
     for i, position_ft in enumerate(positions):
@@ -405,6 +411,8 @@ def _segment(rng, seg_id, start_ft, length_ft, wall_ids, has_story_below) -> dic
     side = random.Random(f"{seg_id}|{start_ft}|{length_ft}|{segment['dead_load_plf']}")
     if side.random() < 0.4:
         segment["hold_down_capacity_lb"] = _r(side.uniform(1500, 20000), 0)
+    if side.random() < 0.3:
+        segment["roof_bearing_width_ft"] = _r(side.choice((0.0, side.uniform(1, 30))), 2)
     return segment
 
 
@@ -448,11 +456,20 @@ def _seismic(rng, method: str) -> dict[str, Any]:
     }
     if rng.random() < 0.25:
         seismic["T_computed_s"] = _r(rng.uniform(0.05, 2.0), 3)
+    # A side stream (existing seeds keep their specs): the Table 12.2-1 entry, the collector
+    # exception left to it, and note g.
+    side = random.Random(f"seismic|{motion}|{seismic['rho']}")
+    seismic["system"]["table_12_2_1_entry"] = side.choice(("A.15", "B.22", "A.18", "other"))
+    if side.random() < 0.4:
+        del seismic["collector_light_frame_exception"]
+    if side.random() < 0.3 and seismic["system"]["Omega0"] >= 3.0:
+        # (Ω0 = 3: a perturbed 17-digit value stays clear of note g's 2.5 threshold)
+        seismic["omega0_flexible_diaphragm_reduction"] = True
     return seismic
 
 
 def _wind(rng, top_ft: float) -> dict[str, Any]:
-    return {
+    wind = {
         "V_mph": rng.choice((95, 105, 110, 115, 130, 150, 180)),
         "exposure": rng.choice(("B", "C", "D")),
         "Kzt": rng.choice((1.0, 1.0, 1.15)),
@@ -464,6 +481,14 @@ def _wind(rng, top_ft: float) -> dict[str, Any]:
         "mean_roof_height_ft": _r(top_ft + rng.uniform(0, 4)),
         "parapet_height_ft": rng.choice((0.0, 0.0, 2.5, 4.0)),
     }
+    # A side stream (existing seeds keep their specs): every enclosure class, the torsional
+    # load cases and a roof projection for the minimum case.
+    side = random.Random(f"wind|{wind['mean_roof_height_ft']}|{wind['ground_elevation_ft']}")
+    wind["enclosure"] = side.choice(("enclosed", "partially_enclosed", "partially_open"))
+    wind["torsional_load_cases"] = side.choice(("by_appendix_d", "by_appendix_d", "all_cases"))
+    if side.random() < 0.3:
+        wind["roof_projection_above_h_ft"] = _r(side.uniform(0.5, 6.0), 2)
+    return wind
 
 
 def _project(rng, text: str | None) -> dict[str, str]:

@@ -9,7 +9,7 @@ from __future__ import annotations
 
 from typing import Any
 
-from latbook.engine.asce7_16 import combinations
+from latbook.engine.asce7_16 import collectors, combinations
 from latbook.engine.sdpws import capacity
 from latbook.spec.models import Spec
 
@@ -55,7 +55,7 @@ COMBINATION_USES: tuple[tuple[str, str, str, str, str, str, str], ...] = (
     (
         "E_dia",
         "Diaphragm unit shear and chords from Fpx, seismic (rho = 1.0)",
-        "seismic_additive",
+        "seismic_additive_dia",
         "Fac_E_dia",
         "Fac_D_E_add",
         "ASCE 7-16 §12.3.4.1, §12.10.1.1",
@@ -72,7 +72,7 @@ COMBINATION_USES: tuple[tuple[str, str, str, str, str, str, str], ...] = (
     ),
     (
         "E_coll",
-        "Collectors and their connections (overstrength)",
+        "Collectors and their connections (overstrength, where §12.10.2.1 requires it)",
         "overstrength_additive",
         "Fac_Em",
         "Fac_D_E_add",
@@ -113,17 +113,21 @@ def combination_results(spec: Spec, out: dict[str, Any]) -> None:
         q["Fac_D_W"] = f.wind_dead_resisting
     if spec.seismic is not None:
         SDS_g, rho = out["seismic.SDS"], spec.seismic.rho
-        f = combinations.lateral_factors(method, SDS_g, rho, spec.seismic.system.Omega0)
+        Omega0 = collectors.omega0_used(
+            spec.seismic.system.Omega0, spec.seismic.omega0_flexible_diaphragm_reduction
+        )
+        f = combinations.lateral_factors(method, SDS_g, rho, Omega0)
+        f_dia = combinations.lateral_factors(method, SDS_g, RHO_DIAPHRAGM, Omega0)
         q["rho"] = rho
         q["SDS"] = SDS_g
+        q["Omega0_used"] = Omega0
         q["seismic_additive"] = f.seismic_additive_name
+        q["seismic_additive_dia"] = f_dia.seismic_additive_name
         q["seismic_resisting"] = f.seismic_resisting_name
         q["overstrength_additive"] = f.overstrength_additive_name
         q["overstrength_resisting"] = f.overstrength_resisting_name
         q["Fac_E"] = f.seismic_lateral
-        q["Fac_E_dia"] = combinations.lateral_factors(
-            method, SDS_g, RHO_DIAPHRAGM, spec.seismic.system.Omega0
-        ).seismic_lateral
+        q["Fac_E_dia"] = f_dia.seismic_lateral
         q["Fac_D_E_add"] = f.seismic_dead_additive
         q["Fac_D_E"] = f.seismic_dead_resisting
         q["Fac_Em"] = f.overstrength_lateral

@@ -35,6 +35,8 @@ def seismic_results(spec: Spec, out: dict[str, Any]) -> None:
         q["SDS"], q["SD1"] = gm.SDS_g, gm.SD1_g
     q["system_label"] = s.system.label
     q["R"], q["Cd"], q["Omega0"] = s.system.R, s.system.Cd, s.system.Omega0
+    q["table_12_2_1_entry"] = s.system.table_12_2_1_entry
+    q["omega0_flexible_diaphragm_reduction"] = s.omega0_flexible_diaphragm_reduction
     q["rho"], q["structure_type"], q["TL"] = s.rho, s.structure_type, s.TL_s
     if s.T_computed_s is not None:
         q["T_computed"] = s.T_computed_s

@@ -13,12 +13,17 @@ Rules used (the Walls_<level> sheets state the same):
   story's own (dead_load_plf is the load added at this story, not the walls above).
 - Resisting moment w L^2/2 + P L with P the smaller end point load (the load reverses, so
   either end may lift), times the combination's dead-load factor.
+- Wind: the roof bearing on the segment lifts with the concurrent MWFRS roof pressure
+  qh (GCpi - G Cp) (ASCE 7-16 Fig. 27.3-1 roof Cp at the segment's end nearest a windward
+  edge, Table 26.13-1 GCpi acting up); its line load times Fac_W is taken off the factored
+  dead load: w_net = Fac_D_W w_D - Fac_W p_up b_roof, never clipped at zero.
 """
 
 from __future__ import annotations
 
 from typing import Any
 
+from latbook.engine.asce7_16 import wind_cases
 from latbook.engine.sdpws import shear_wall as sw
 from latbook.spec.models import ShearWallAssembly, Spec
 from latbook.spec.wall_stories import LinePlace, SegmentPlace, StoryPlace, wall_stories
@@ -73,11 +78,15 @@ def shear_wall_results(spec: Spec, out: dict[str, Any]) -> None:
     _input_values(spec, out)
     sources = active_sources(spec)
     cap = _need(out, "combo.Cap_factor")
-    for story in wall_stories(spec):
+    stories = wall_stories(spec)
+    for story in stories:
         lv = story.level.id
         h_story = story_height_ft(story)
         out[f"walls.{lv}.h_story_ft"] = h_story
         for line in story.lines:
+            if "wind" in sources:
+                for seg in line.segments:
+                    _roof_uplift(spec, out, story, line, seg, top=story is stories[0])
             _line_results(out, story, line, h_story, assemblies, sources, cap)
         _story_governing(out, story, sources)
 
@@ -131,7 +140,8 @@ def _line_results(out, story, line: LinePlace, h_story, assemblies, sources, cap
     out[f"{lbase}.sum_Lk"] = sum_Lk
     for src in sources:
         combo = tuple(_need(out, q) for q in _COMBO[src])
-        R = _need(out, f"diaph.{lv}.{d}.line.{ln}.{SOURCES[src]}")
+        # magnitude: the load reverses, and a line beside a long overhang may be pulled back
+        R = abs(_need(out, f"diaph.{lv}.{d}.line.{ln}.{SOURCES[src]}"))
         V_line = R + (out[f"walls.{line.above}.line.{ln}.V_{src}"] if line.above else 0.0)
         out[f"{lbase}.R_{src}"] = R
         out[f"{lbase}.V_{src}"] = V_line
@@ -151,6 +161,47 @@ def _line_results(out, story, line: LinePlace, h_story, assemblies, sources, cap
             running_max = max(running_max, delta)
             out[f"{base}.cum_delta_{src}"] = running_max
         out[f"{lbase}.delta_{src}_max"] = running_max
+
+
+def _roof_uplift(spec: Spec, out, story, line: LinePlace, seg: SegmentPlace, top: bool) -> None:
+    """Roof wind uplift on the roof strip the segment carries (module doc) and the net
+    resisting line load of the wind overturning combination."""
+    w = spec.wind
+    assert w is not None
+    d = line.line.direction
+    roof = max(spec.building.levels, key=lambda lv: lv.elevation_ft)
+    lo_roof, hi_roof = _extent(roof, d)
+    lo_seg, _ = _extent(story.level, d)
+    start = lo_seg + seg.segment.start_ft
+    end = start + seg.segment.length_ft
+    dist = max(0.0, min(start - lo_roof, hi_roof - end))
+    zone = wind_cases.roof_zone_index(dist, w.mean_roof_height_ft)
+    Cp = out[f"wind.{d}.roof_Cp_{zone}"]
+    p_up = wind_cases.roof_net_uplift_psf(out[f"wind.{d}.qh_psf"], w.G, Cp, out[f"wind.{d}.GCpi"])
+    given = seg.segment.roof_bearing_width_ft
+    if given is not None:
+        width = given
+    elif top:
+        width = out[f"diaph.{story.level.id}.{d}.line.{line.line.id}.trib_geo_ft"]
+    else:
+        width = 0.0
+    w_up = p_up * width
+    w_net = out["combo.Fac_D_W"] * seg.segment.dead_load_plf - out["combo.Fac_W"] * w_up
+    values = {
+        "roof_dist_ft": dist,
+        "roof_Cp": Cp,
+        "p_up_psf": p_up,
+        "roof_width_ft": width,
+        "w_up_plf": w_up,
+        "w_net_plf": w_net,
+    }
+    for key, value in values.items():
+        out[f"walls.{story.level.id}.seg.{seg.key}.{key}"] = value
+
+
+def _extent(level, axis: str) -> tuple[float, float]:
+    plan = level.plan
+    return (plan.x_min_ft, plan.x_max_ft) if axis == "x" else (plan.y_min_ft, plan.y_max_ft)
 
 
 def _geometry(out, story, seg: SegmentPlace, h_story: float) -> dict[str, Any]:
@@ -182,8 +233,17 @@ def _segment_forces(out, base, above, seg: SegmentPlace, g, src, V_seg, v_eff, c
     nominal = a.vs_nominal_plf if src == "seis" else a.vw_nominal_plf
     capacity = nominal * cap
     M_ot = sw.overturning_moment_lbft([fac * V_seg], [g["h"]])
-    uplift = sw.net_uplift_lb(M_ot, g["M_r"], fac_d, s.length_ft, s.hold_down_offset_ft)
-    T_story = sw.hold_down_tension_lb(M_ot, g["M_r"], fac_d, s.length_ft, s.hold_down_offset_ft)
+    if src == "wind":
+        # factored resisting moment with the roof uplift taken off (module doc)
+        P_far = min(s.point_load_start_lb, s.point_load_end_lb)
+        w_net = out[f"{base}.w_net_plf"]
+        M_r = sw.resisting_moment_lbft(w_net, s.length_ft, fac_d * P_far, 0.0)
+        out[f"{base}.M_r_net_wind"] = M_r
+        fac_r = 1.0
+    else:
+        M_r, fac_r = g["M_r"], fac_d
+    uplift = sw.net_uplift_lb(M_ot, M_r, fac_r, s.length_ft, s.hold_down_offset_ft)
+    T_story = sw.hold_down_tension_lb(M_ot, M_r, fac_r, s.length_ft, s.hold_down_offset_ft)
     P_end_lb = fac_d_add * max(s.point_load_start_lb, s.point_load_end_lb)
     C_story = sw.end_post_compression_lb(M_ot, s.length_ft, s.hold_down_offset_ft, P_end_lb)
     T_above = out[f"{above}.T_{src}"] if above else 0.0

@@ -5,21 +5,29 @@ from __future__ import annotations
 
 from typing import Any
 
+from latbook.engine.asce7_16 import combinations
 from latbook.spec.models import Spec
 from latbook.spec.summary_items import SummaryItem, summary_items
 
 NO_CAPACITY = "no capacity in spec: choose one for the demand"
 NOT_GIVEN = "not given"
 FAILS, OK, MARKER = "FAILS", "ok", "<<<"
+INCOMPLETE = "INCOMPLETE: no DCR above 1.0, but some checks were not made (rows not marked ok)"
 DRIFT_BASIS = {
     "seis": "strength-level E (QE), Cd δxe / Ie",
     "wind": "strength-level W (conservative for serviceability)",
 }
 
 
+CANTILEVER_OK = "limits ok; edge drift not checked"
+CANTILEVER_BASIS_TEXT = "geometry, SDPWS-2015 §4.2.5.2"
+
+
 def combination_text(item: SummaryItem, out: dict[str, Any]) -> str:
     """The load combination a row's check uses, named on the Combos sheet (ASCE 7-16 §2.3,
     §2.4, §12.4); unit shear with D adding, hold-downs with D resisting."""
+    if item.kind == "cantilever":
+        return CANTILEVER_BASIS_TEXT
     if item.kind == "diaph":
         return f"see Dia_{item.level}_{item.dir}"
     if item.kind in ("chord", "collector"):
@@ -35,6 +43,10 @@ def _element_and_values(item: SummaryItem, out: dict[str, Any]) -> tuple[str, An
     """(element text, demand, DCR) for one row."""
     if item.kind == "diaph":
         return f"level {item.level}, load in {item.dir}", "-", out[f"diaph.{item.key[6:]}.dcr_max"]
+    if item.kind == "cantilever":
+        prefix = f"diaph.{item.level}.{item.dir}.cant."
+        dcr = max(v for k, v in out.items() if k.startswith(prefix) and k.endswith(".dcr"))
+        return f"level {item.level} overhang, load in {item.dir}", "-", dcr
     if item.kind == "wall":
         lv, src = item.level, item.source
         return out[f"walls.{lv}.dcr_{src}_gov"], "-", out[f"walls.{lv}.dcr_{src}_max"]
@@ -57,18 +69,68 @@ def _hold_down_row(lv: str, src: str, out: dict[str, Any]) -> tuple[str, Any, An
     return gov, out[f"walls.{lv}.T_{src}_max"], dcr
 
 
+ROOF_UPLIFT_BASIS = (
+    "Roof wind uplift on shear walls: ASCE 7-16 Fig. 27.3-1 roof Cp for θ <= 10° at the end of "
+    "the wall nearer a windward edge (zones measured with the mean roof height h; the -1.3 area "
+    "reduction not taken), GCpi of Table 26.13-1 acting up; a blank roof width is the roof width "
+    "of the line in the top story, 0 below"
+)
+MINIMUM_WIND_BASIS = (
+    "Wind minimum load case (ASCE 7-16 §27.1.5): 16 psf walls + 8 psf roof projection, carried "
+    "as its own case to every element"
+)
+CANTILEVER_BASIS = "Diaphragm overhangs: SDPWS-2015 §4.2.5.2 limits; deflections shown tolerable: "
+
+
+LIVE_CHOICES = ("torsion", "collector", "omega", "cantilever")
+"""Choices the Summary prints as live formulas of their input cells (the rest are fixed text)."""
+
+
+def design_choices(spec: Spec, out: dict[str, Any]) -> dict[str, str]:
+    """The designer's choices and the tool's stated assumptions, as the Summary prints them
+    (id suffix -> text). Each names its clause."""
+    texts: dict[str, str] = {}
+    if spec.wind is not None:
+        texts["torsion"] = (
+            "Wind torsional load cases (ASCE 7-16 Fig. 27.3-8, App. D): "
+            f"{spec.wind.torsional_load_cases}; Cases 2 and 4 applied: "
+            f"{out['wind.x.torsion_applied']}"
+        )
+        texts["wind_minimum"] = MINIMUM_WIND_BASIS
+        texts["roof_uplift"] = ROOF_UPLIFT_BASIS
+    if spec.seismic is not None:
+        texts["collector"] = (
+            "Collectors (ASCE 7-16 §12.10.2.1): Exception 1 taken: "
+            f"{out['diaph.collector_exception']}; overstrength applied: "
+            f"{out['diaph.collector_overstrength']}"
+        )
+        texts["omega"] = (
+            "Ω0 applied (ASCE 7-16 Table 12.2-1, note g for flexible diaphragms): "
+            + combinations.number_text(out["combo.Omega0_used"])
+        )
+    tolerated = "yes" if spec.diaphragms.cantilever_deflection_tolerated else "no"
+    texts["cantilever"] = (
+        CANTILEVER_BASIS + tolerated + "; story drift at the overhang edge not checked"
+    )
+    return texts
+
+
 def summary_results(spec: Spec, out: dict[str, Any]) -> None:
     """Every Summary quantity; nothing when the spec has no wall lines."""
     items = summary_items(spec)
     if not items:
         return
+    for key, text in design_choices(spec, out).items():
+        if key in LIVE_CHOICES:
+            out[f"summary.choice.{key}"] = text
     dcrs: list[float] = []
     for item in items:
         element, demand, dcr = _element_and_values(item, out)
         if isinstance(dcr, str):
             status = NO_CAPACITY
         else:
-            status = FAILS if dcr > 1 else OK
+            ok = CANTILEVER_OK if item.kind == "cantilever" else OK
+            status = FAILS if dcr > 1 else ok
             dcrs.append(dcr)
         base = f"summary.{item.key}"
         out[f"{base}.element"] = element
@@ -78,6 +140,11 @@ def summary_results(spec: Spec, out: dict[str, Any]) -> None:
         out[f"{base}.status"] = status
         out[f"{base}.marker"] = MARKER if status == FAILS else "-"
     out["summary.dcr_max"] = max(dcrs)
-    out["summary.overall"] = (
-        "FAILS: see the rows marked <<<" if max(dcrs) > 1 else "ok: every DCR is 1.0 or less"
-    )
+    statuses = [out[f"summary.{item.key}.status"] for item in items]
+    if max(dcrs) > 1:
+        overall = "FAILS: see the rows marked <<<"
+    elif any(status != OK for status in statuses):
+        overall = INCOMPLETE
+    else:
+        overall = "ok: every DCR is 1.0 or less"
+    out["summary.overall"] = overall

@@ -11,7 +11,7 @@ from __future__ import annotations
 from typing import Any
 
 from latbook.analysis.seismic import levels_top_down
-from latbook.engine.asce7_16 import wind
+from latbook.engine.asce7_16 import wind, wind_cases
 from latbook.spec.models import Level, Spec
 
 #: direction -> (axis along the wind, axis across the wind)
@@ -40,6 +40,23 @@ def wind_input_results(spec: Spec, out: dict[str, Any]) -> None:
     out["wind.enclosure"] = w.enclosure
     out["wind.mean_roof_height_ft"] = w.mean_roof_height_ft
     out["wind.parapet_height_ft"] = w.parapet_height_ft
+    out["wind.roof_slope_deg"] = w.roof_slope_deg
+    out["wind.roof_projection_above_h_ft"] = w.roof_projection_above_h_ft
+    out["wind.torsional_load_cases"] = w.torsional_load_cases
+
+
+def torsional_cases_apply(spec: Spec) -> bool:
+    """True when the diaphragms take Load Cases 2 and 4 of ASCE 7-16 Fig. 27.3-8: chosen, or
+    by Appendix D, D1.1 for a building it does not exempt (every diaphragm flexible here)."""
+    w = spec.wind
+    if w is None:
+        return False
+    if w.torsional_load_cases == "all_cases":
+        return True
+    if w.torsional_load_cases == "cases_1_and_3":
+        return False
+    n = len(spec.building.levels)
+    return not wind_cases.torsional_cases_exempt(n, w.mean_roof_height_ft, True)
 
 
 def wind_results(spec: Spec, out: dict[str, Any]) -> None:
@@ -101,19 +118,40 @@ def direction_results(spec: Spec, direction: str, out: dict[str, Any]) -> None:
     q["parapet_width_ft"] = B_ft[0]
     q["parapet_F_kip"] = parapet["F_kip"]
     q["parapet_z_centroid_ft"] = parapet["z_centroid_ft"]
-    F_level = [f["F_level_kip"] for f in forces]
+    F_level = [f["F_kip"] + f["F_parapet_kip"] for f in forces]
     shears = wind.story_shears(F_level)
     q["V_base_kip"] = shears[-1]
     q["M_base_kipft"] = wind.base_overturning_kipft(
-        [f["F_design_kip"] for f in forces],
-        z_ft,
-        parapet["F_kip"],
-        parapet["z_centroid_ft"],
+        [f["F_kip"] for f in forces], z_ft, parapet["F_kip"], parapet["z_centroid_ft"]
     )
+    hr_ft = w.roof_projection_above_h_ft
+    F_min, M_min = [], []
+    for i, f in enumerate(forces):
+        band = wind_cases.minimum_case_force_kip(f["z_hi_ft"] - f["z_lo_ft"], f["width_ft"])
+        F_i, M_i = band, band * f["z_ft"]
+        if i == 0:
+            F_par = wind_cases.minimum_case_force_kip(hp_ft, f["width_ft"])
+            F_roof = wind_cases.minimum_case_force_kip(0.0, f["width_ft"], hr_ft)
+            F_i += F_par + F_roof
+            M_i += F_par * (h_ft + hp_ft / 2.0) + F_roof * (h_ft + hr_ft / 2.0)
+        F_min.append(F_i)
+        M_min.append(M_i)
+    shears_min = wind.story_shears(F_min)
+    q["V_base_min_kip"] = shears_min[-1]
+    q["M_base_min_kipft"] = sum(M_min)
+    q["base_case"] = (
+        "computed pressures" if q["V_base_kip"] >= q["V_base_min_kip"] else "§27.1.5 minimum"
+    )
+    q["roof_L_ft"] = L_ft[0]
+    q["roof_h_over_L"] = h_ft / L_ft[0]
+    for zone in range(4):
+        q[f"roof_Cp_{zone}"] = wind_cases.roof_zone_cp(q["roof_h_over_L"], zone)
+    q.update(_torsion_and_roof_parameters(spec))
     for key, value in q.items():
         out[f"wind.{direction}.{key}"] = value
 
-    for level, f, V_kip, L_i in zip(levels, forces, shears, L_ft, strict=True):
+    rows = zip(levels, forces, shears, L_ft, F_min, shears_min, M_min, strict=True)
+    for level, f, V_kip, L_i, F_min_kip, V_min_kip, M_min_kipft in rows:
         F_case1_kip = f["F_kip"] + f["F_parapet_kip"]
         row: dict[str, Any] = {
             "z_ft": f["z_ft"],
@@ -128,17 +166,39 @@ def direction_results(spec: Spec, direction: str, out: dict[str, Any]) -> None:
             "B_ft": f["width_ft"],
             "L_ft": L_i,
             "F_pressure": f["F_kip"],
-            "F_min": f["F_min_kip"],
-            "F_design": f["F_design_kip"],
-            "governs": f["governs"],
             "F_parapet": f["F_parapet_kip"],
-            "F_level": f["F_level_kip"],
+            "F_level": F_case1_kip,
             "V_story": V_kip,
-            "M_contrib": f["F_design_kip"] * f["z_ft"],
+            "M_contrib": f["F_kip"] * f["z_ft"],
+            "F_min": F_min_kip,
+            "V_story_min": V_min_kip,
+            "M_contrib_min": M_min_kipft,
             "F_case1": F_case1_kip,
             "F_case2": wind.case2_force(F_case1_kip),
             "e_case2_ft": wind.case2_eccentricity_ft(f["width_ft"]),
             "MT_case2": wind.case2_torsion(F_case1_kip, f["width_ft"]),
+            "F_case3": wind_cases.CASE_2_3_FRACTION * F_case1_kip,
+            "F_case4": wind_cases.CASE_4_FRACTION * F_case1_kip,
+            "MT_case4": wind_cases.CASE_4_FRACTION
+            * F_case1_kip
+            * wind_cases.ECCENTRICITY_FRACTION
+            * f["width_ft"],
         }
         for key, value in row.items():
             out[f"wind.{direction}.level.{level.id}.{key}"] = value
+
+
+def _torsion_and_roof_parameters(spec: Spec) -> dict[str, Any]:
+    """Appendix D, D1.1 test and the Table 26.13-1 GCpi (the same on both Wind sheets)."""
+    w = spec.wind
+    assert w is not None
+    n = len(spec.building.levels)
+    exempt = wind_cases.torsional_cases_exempt(n, w.mean_roof_height_ft, True)
+    return {
+        "n_stories": n,
+        "D1_one_story": "yes" if n == 1 and w.mean_roof_height_ft <= 30.0 else "no",
+        "D1_two_story_flexible": "yes" if n <= 2 else "no",
+        "D1_exempt": "yes" if exempt else "no",
+        "torsion_applied": "yes" if torsional_cases_apply(spec) else "no",
+        "GCpi": wind_cases.GCPI_BY_ENCLOSURE[w.enclosure],
+    }

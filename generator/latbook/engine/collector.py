@@ -2,10 +2,11 @@
 
 Model (statics of the strut, ASCE 7-16 §12.10.2 collectors; SDPWS-2015 §4.1.4 load path):
 the line runs along s from 0 to b_ft (the diaphragm depth at that line). The diaphragm delivers
-its reaction R uniformly, v_d = R/b (plf); the shear wall segments on the line resist it
-uniformly over their total length, v_w = R/sum(L_i). The strut's axial force at s is
+its reaction R uniformly, v_d = R/b (plf); each shear wall segment i takes the share of R that
+the walls sheets give it, R L_i k_i / sum(L k) (SDPWS-2015 §4.3.3.4.1; k = 1 for every segment
+when no factors are given), spread uniformly over its length. The strut's axial force at s is
 
-    F(s) = v_d * s - v_w * (wall length within [0, s])
+    F(s) = v_d * s - R * (sum of L k within [0, s]) / sum(L k)
 
 so F(0) = F(b) = 0, F is linear between breakpoints and its peak lies at a breakpoint.
 
@@ -45,8 +46,25 @@ def _validate(b_ft: float, segments: list[Segment]) -> list[Segment]:
     return ordered
 
 
-def _wall_length_within_ft(segments: list[Segment], s_ft: float) -> float:
-    return sum(min(max(s_ft - start_ft, 0.0), length_ft) for start_ft, length_ft in segments)
+def _weighted_length_within_ft(segments: list[Segment], factors: list[float], s_ft: float) -> float:
+    """sum of k_i x (length of segment i within [0, s])."""
+    return sum(
+        k * min(max(s_ft - start_ft, 0.0), length_ft)
+        for (start_ft, length_ft), k in zip(segments, factors, strict=True)
+    )
+
+
+def _ordered_with_factors(
+    b_ft: float, segments: list[Segment], factors: list[float] | None
+) -> tuple[list[Segment], list[float]]:
+    ks = [1.0] * len(segments) if factors is None else list(factors)
+    if len(ks) != len(segments):
+        raise ValueError("one factor k per segment is required")
+    _validate(b_ft, segments)
+    pairs = sorted(zip(segments, ks, strict=True))
+    if sum(L * k for (_, L), k in pairs) <= 0:
+        raise ValueError("no segment on the line takes shear (sum of L k is 0)")
+    return [p[0] for p in pairs], [p[1] for p in pairs]
 
 
 def collector_breakpoints(b_ft: float, segments: list[Segment]) -> list[float]:
@@ -63,36 +81,44 @@ def collector_breakpoints(b_ft: float, segments: list[Segment]) -> list[float]:
     return unique
 
 
-def collector_force_at_lb(b_ft: float, R_lb: float, segments: list[Segment], s_ft: float) -> float:
-    """Collector force F(s) = v_d s - v_w (wall length in [0, s]), sign as in the module doc,
-    0 where |F| <= ZERO_FORCE_REL |R| (rounding noise), ASCE 7-16 §12.10.2 [lb]."""
-    ordered = _validate(b_ft, segments)
+def collector_force_at_lb(
+    b_ft: float,
+    R_lb: float,
+    segments: list[Segment],
+    s_ft: float,
+    factors: list[float] | None = None,
+) -> float:
+    """Collector force F(s) = R s / b - R (sum of L k in [0, s]) / sum(L k), sign as in the
+    module doc, 0 where |F| <= ZERO_FORCE_REL |R| (rounding noise), ASCE 7-16 §12.10.2 with the
+    wall shares of SDPWS-2015 §4.3.3.4.1 [lb]."""
+    ordered, ks = _ordered_with_factors(b_ft, segments, factors)
     if s_ft < -_POSITION_TOLERANCE_FT or s_ft > b_ft + _POSITION_TOLERANCE_FT:
         raise ValueError("s_ft must lie within [0, b_ft]")
-    diaphragm_unit_shear_plf = R_lb / b_ft
-    wall_unit_shear_plf = R_lb / sum(length_ft for _, length_ft in ordered)
-    force_lb = diaphragm_unit_shear_plf * s_ft - wall_unit_shear_plf * _wall_length_within_ft(
-        ordered, s_ft
+    total_Lk_ft = sum(L * k for (_, L), k in zip(ordered, ks, strict=True))
+    force_lb = (
+        R_lb / b_ft * s_ft - R_lb * _weighted_length_within_ft(ordered, ks, s_ft) / total_Lk_ft
     )
     return force_lb if abs(force_lb) > ZERO_FORCE_REL * abs(R_lb) else 0.0
 
 
 def collector_forces(
-    b_ft: float, R_lb: float, segments: list[Segment]
+    b_ft: float, R_lb: float, segments: list[Segment], factors: list[float] | None = None
 ) -> list[tuple[float, float]]:
     """Collector force diagram as (s_ft, F_lb) at every breakpoint; F(0) = F(b) = 0,
     ASCE 7-16 §12.10.2 [ft, lb]."""
     return [
-        (s_ft, collector_force_at_lb(b_ft, R_lb, segments, s_ft))
+        (s_ft, collector_force_at_lb(b_ft, R_lb, segments, s_ft, factors))
         for s_ft in collector_breakpoints(b_ft, segments)
     ]
 
 
-def collector_peak(b_ft: float, R_lb: float, segments: list[Segment]) -> tuple[float, float]:
+def collector_peak(
+    b_ft: float, R_lb: float, segments: list[Segment], factors: list[float] | None = None
+) -> tuple[float, float]:
     """Largest collector force magnitude on the line and where it occurs (first if tied),
     ASCE 7-16 §12.10.2 [lb, ft]."""
     peak_lb, peak_s_ft = 0.0, 0.0
-    for s_ft, force_lb in collector_forces(b_ft, R_lb, segments):
+    for s_ft, force_lb in collector_forces(b_ft, R_lb, segments, factors):
         if abs(force_lb) > peak_lb + 1e-9 * max(1.0, abs(peak_lb)):
             peak_lb, peak_s_ft = abs(force_lb), s_ft
     return peak_lb, peak_s_ft

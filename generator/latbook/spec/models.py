@@ -127,6 +127,9 @@ class DirectMotion(_Strict):
 GroundMotion = Annotated[SiteClassMotion | DirectMotion, Field(discriminator="method")]
 
 
+TABLE_12_2_1_ENTRIES = ("A.15", "A.16", "A.17", "A.18", "B.22", "B.23", "B.24", "other")
+
+
 class SeismicSystem(_Strict):
     """Seismic force-resisting system (ASCE 7-16 Table 12.2-1 row chosen by the engineer)."""
 
@@ -134,6 +137,12 @@ class SeismicSystem(_Strict):
     R: Annotated[float, Field(ge=1.0, le=8.0)]
     Cd: Annotated[float, Field(ge=1.0, le=6.5)]
     Omega0: Annotated[float, Field(ge=1.0, le=3.0)]
+    table_12_2_1_entry: Literal[TABLE_12_2_1_ENTRIES] = Field(  # type: ignore[valid-type]
+        "other",
+        description="ASCE 7-16 Table 12.2-1 entry of the system: A.15-A.17 and B.22-B.24 are the "
+        "light-frame shear-wall systems for which the collector exception of §12.10.2.1 is the "
+        "default; 'other' for any other system.",
+    )
 
 
 class Seismic(_Strict):
@@ -152,11 +161,19 @@ class Seismic(_Strict):
     rho: Annotated[Literal[1.0, 1.3], BeforeValidator(not_a_boolean)] = Field(
         1.0, description="Redundancy factor, ASCE 7-16 §12.3.4."
     )
-    collector_light_frame_exception: bool = Field(
+    collector_light_frame_exception: bool | None = Field(
+        None,
+        description="ASCE 7-16 §12.10.2.1 Exception 1 (structure braced entirely by light-frame "
+        "shear walls: collectors designed for the §12.10.1.1 forces without overstrength). "
+        "Blank: taken where system.table_12_2_1_entry is a light-frame shear-wall entry, not "
+        "taken otherwise. false: declined (collectors in SDC C-F take the overstrength forces). "
+        "true: declared by the designer.",
+    )
+    omega0_flexible_diaphragm_reduction: bool = Field(
         False,
-        description="True: the structure is braced entirely by light-frame shear walls and "
-        "collectors are designed without overstrength (ASCE 7-16 §12.10.2.1, Exception). "
-        "False: collectors in SDC C-F take the overstrength forces of §12.10.2.1.",
+        description="ASCE 7-16 Table 12.2-1 footnote g: with flexible diaphragms, Ω0 may be "
+        "reduced by 0.5 where the tabulated Ω0 is 2.5 or more. Every diaphragm here is analysed "
+        "as flexible. Default false (the tabulated Ω0).",
     )
 
 
@@ -170,9 +187,28 @@ class Wind(_Strict):
     ground_elevation_ft: Annotated[float, Field(ge=-500, le=15000)] = 0.0
     use_Ke: bool = Field(True, description="False takes Ke = 1.0, always permitted (§26.9).")
     G: Annotated[float, Field(gt=0, le=2.0)] = 0.85
-    enclosure: Literal["enclosed", "partially_enclosed"] = "enclosed"
+    enclosure: Literal["enclosed", "partially_enclosed", "partially_open"] = Field(
+        "enclosed", description="ASCE 7-16 §26.2 enclosure class; GCpi from Table 26.13-1."
+    )
     mean_roof_height_ft: Annotated[float, Field(gt=0, le=400)]
     parapet_height_ft: Annotated[float, Field(ge=0, le=20)] = 0.0
+    roof_slope_deg: Annotated[float, Field(ge=0, le=10)] = Field(
+        0.0,
+        description="Roof slope θ. Roof uplift uses ASCE 7-16 Fig. 27.3-1 for θ <= 10° (and for "
+        "wind parallel to the ridge); steeper roofs are outside this tool.",
+    )
+    roof_projection_above_h_ft: Annotated[float, Field(ge=0, le=100)] = Field(
+        0.0,
+        description="Height of the roof's projection on a vertical plane above the mean roof "
+        "height (ridge height minus h; 0 for a flat roof): loaded with 8 psf in the §27.1.5 "
+        "minimum case.",
+    )
+    torsional_load_cases: Literal["by_appendix_d", "all_cases", "cases_1_and_3"] = Field(
+        "by_appendix_d",
+        description="ASCE 7-16 Fig. 27.3-8 load cases applied to the diaphragms: by_appendix_d "
+        "(Cases 1 and 3 only where Appendix D, D1.1 exempts the building, else all four); "
+        "all_cases; cases_1_and_3 (only for a building that D1.1 exempts).",
+    )
 
 
 class DiaphragmAssembly(_Strict):
@@ -230,6 +266,13 @@ class Segment(_Strict):
     hold_down_continues_below: bool = Field(
         False, description="True: the hold-down stacks onto the segment below."
     )
+    roof_bearing_width_ft: Annotated[float, Field(ge=0, le=2000)] | None = Field(
+        None,
+        description="Width of roof bearing on the segment, ft, for the wind uplift on the roof "
+        "(ASCE 7-16 Fig. 27.3-1, Table 26.13-1). Blank: in the top story, the line's tributary "
+        "width at the roof (half the distance to the neighbouring parallel lines, the whole "
+        "overhang at an outermost line); 0 in lower stories. 0: carries no roof.",
+    )
     hold_down_capacity_lb: Annotated[float, Field(gt=0, le=1.0e6)] | None = Field(
         None,
         description=(
@@ -265,6 +308,17 @@ class WallLine(_Strict):
     stories: list[LineStory] = Field(min_length=1, max_length=MAX_LEVELS)
 
 
+class DiaphragmOptions(_Strict):
+    """Choices for the diaphragm checks."""
+
+    cantilever_deflection_tolerated: bool = Field(
+        False,
+        description="AWC SDPWS-2015 §4.2.5.2: where calculations show that the diaphragm "
+        "deflections can be tolerated, the cantilever length-to-width ratio may be up to 1.5 "
+        "(wood structural panels); default false: 1.0 for one story, 0.67 for more.",
+    )
+
+
 class DriftLimits(_Strict):
     seismic_row: Literal[
         "four_story_drift_tolerant", "masonry_cantilever", "other_masonry", "all_other"
@@ -291,6 +345,7 @@ class Spec(_Strict):
     assemblies: Assemblies = Assemblies()
     wall_lines: list[WallLine] = Field(default_factory=list, max_length=MAX_WALL_LINES)
     drift: DriftLimits = DriftLimits()
+    diaphragms: DiaphragmOptions = DiaphragmOptions()
 
     @model_validator(mode="after")
     def _some_load(self) -> Spec:

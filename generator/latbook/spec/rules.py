@@ -304,6 +304,8 @@ def _two_lines_each_way(spec: Spec) -> Iterator[Problem]:
 def _wind(spec: Spec) -> Iterator[Problem]:
     if spec.wind is None:
         return
+    from latbook.engine.asce7_16.wind_cases import torsional_cases_exempt
+
     top = max(lv.elevation_ft for lv in spec.building.levels)
     if spec.wind.mean_roof_height_ft < top - _EPS_FT:
         yield Problem(
@@ -311,10 +313,31 @@ def _wind(spec: Spec) -> Iterator[Problem]:
             "range",
             f"mean roof height is below the highest level ({top:g} ft)",
         )
+    n = len(spec.building.levels)
+    if spec.wind.torsional_load_cases == "cases_1_and_3" and not torsional_cases_exempt(
+        n, spec.wind.mean_roof_height_ft, True
+    ):
+        yield Problem(
+            "$.wind.torsional_load_cases",
+            "appendix_d",
+            f"Cases 1 and 3 alone are allowed only for buildings ASCE 7-16 Appendix D, D1.1 "
+            f"exempts (one story with h <= 30 ft, or two stories or less with flexible "
+            f"diaphragms); this building has {n} stories: use 'by_appendix_d' or 'all_cases'",
+        )
 
 
 def _seismic(spec: Spec) -> Iterator[Problem]:
-    if spec.seismic is None or spec.seismic.ground_motion.method != "site_class":
+    if spec.seismic is None:
+        return
+    if spec.seismic.omega0_flexible_diaphragm_reduction and spec.seismic.system.Omega0 < 2.5:
+        yield Problem(
+            "$.seismic.omega0_flexible_diaphragm_reduction",
+            "table_12_2_1_note_g",
+            "Ω0 may be reduced by 0.5 for flexible diaphragms only where the tabulated Ω0 is "
+            f"2.5 or more (ASCE 7-16 Table 12.2-1 note g); system.Omega0 is "
+            f"{spec.seismic.system.Omega0:g}",
+        )
+    if spec.seismic.ground_motion.method != "site_class":
         return
     from latbook.engine.asce7_16 import site
     from latbook.engine.errors import CodeLimitError

@@ -9,6 +9,7 @@ from __future__ import annotations
 from dataclasses import dataclass
 
 from latbook.spec.models import Spec
+from latbook.spec.plan_geometry import diaphragm_spans, resisting_lines, span_extent_ft
 from latbook.spec.wall_stories import levels_top_down, wall_stories
 
 SOURCE_TEXT = {"seis": "seismic", "wind": "wind"}
@@ -23,7 +24,7 @@ DIAPHRAGM_FAMILIES = (
 @dataclass(frozen=True)
 class SummaryItem:
     key: str
-    kind: str  # "diaph", "chord", "collector", "wall", "hold_down", "drift"
+    kind: str  # "diaph", "chord", "collector", "cantilever", "wall", "hold_down", "drift"
     family: str
     source: str  # "seis", "wind" or "both"
     level: str = ""
@@ -36,8 +37,15 @@ class SummaryItem:
         return [f"{self.kind}_{self.source}", self.kind, self.source]
 
 
+def _has_overhang(spec: Spec, level, direction) -> bool:
+    lines = resisting_lines(spec, level.id, direction)
+    spans = diaphragm_spans(lines, span_extent_ft(level, direction))
+    return any(sp.kind != "simple" for sp in spans)
+
+
 def summary_items(spec: Spec) -> list[SummaryItem]:
-    """Every Summary row: diaphragms, chords, collectors, then walls, hold-downs and drift."""
+    """Every Summary row: diaphragms, chords, collectors, overhangs, then walls, hold-downs and
+    drift."""
     if not spec.wall_lines:
         return []
     sources = [s for s, on in (("seis", spec.seismic), ("wind", spec.wind)) if on is not None]
@@ -46,6 +54,12 @@ def summary_items(spec: Spec) -> list[SummaryItem]:
         for kind, family, unit in DIAPHRAGM_FAMILIES
         for lv in levels_top_down(spec)
         for d in ("x", "y")
+    ]
+    items += [
+        SummaryItem(f"cantilever.{lv.id}.{d}", "cantilever", "diaphragm overhang", "both", lv.id, d)
+        for lv in levels_top_down(spec)
+        for d in ("x", "y")
+        if _has_overhang(spec, lv, d)
     ]
     stories = [st.level.id for st in wall_stories(spec)]
     for kind, family, unit in (("wall", "shear wall", "-"), ("hold_down", "hold-down", "lb")):

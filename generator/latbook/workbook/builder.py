@@ -114,7 +114,7 @@ def _write(spec, results, plans, registry, tmp, spec_json, spec_sha256, protect)
     header = _page_header(spec)
 
     cover = wb.add_worksheet(COVER_SHEET)
-    last = write_cover(cover, spec, spec_sha256, styles)
+    last = write_cover(cover, spec, spec_sha256, styles, results)
     _finish_sheet(cover, header, last, 1, protect, landscape=False)
 
     sheets = {plan.name: wb.add_worksheet(plan.name) for plan in plans}

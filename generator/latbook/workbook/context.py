@@ -10,6 +10,7 @@ from dataclasses import dataclass, field
 from typing import Any
 
 from latbook.analysis.combinations import combination_uses
+from latbook.analysis.wind import torsional_cases_apply
 from latbook.spec.models import Spec
 from latbook.workbook.diaphragm_context import diaphragm_collections, wall_input_collections
 from latbook.workbook.wall_collections import wall_collections
@@ -44,6 +45,8 @@ def build_context(spec: Spec) -> Context:
             flags.add("T_computed")
     if spec.wind is not None:
         flags.add("wind")
+        if torsional_cases_apply(spec):
+            flags.add("wind_torsion")
     if spec.wall_lines:
         flags.add("walls")
     ctx = Context(

@@ -2,9 +2,12 @@
 
 from __future__ import annotations
 
+from typing import Any
+
 from xlsxwriter.worksheet import Worksheet
 
 from latbook import __version__
+from latbook.analysis.summary import design_choices
 from latbook.spec.models import Spec
 from latbook.workbook.cautions import CAUTION_LINES
 from latbook.workbook.styles import Styles
@@ -12,7 +15,13 @@ from latbook.workbook.styles import Styles
 COVER_SHEET = "Cover"
 
 
-def write_cover(ws: Worksheet, spec: Spec, spec_sha256: str, styles: Styles) -> int:
+def write_cover(
+    ws: Worksheet,
+    spec: Spec,
+    spec_sha256: str,
+    styles: Styles,
+    results: dict[str, Any] | None = None,
+) -> int:
     """Write the cover; returns the last row used."""
     ws.set_column(0, 0, 24)
     ws.set_column(1, 1, 80)
@@ -41,6 +50,13 @@ def write_cover(ws: Worksheet, spec: Spec, spec_sha256: str, styles: Styles) -> 
         ws.write_string(row, 0, label, styles.get("cover_label"))
         ws.write_string(row, 1, value, styles.get("cover_value"))
         row += 1
+    if results is not None and spec.wall_lines:
+        row += 1
+        ws.write_string(row, 0, "Design choices", styles.get("cover_label"))
+        for text in design_choices(spec, results).values():
+            ws.set_row(row, _height_for(text, chars_per_line=95))
+            ws.write_string(row, 1, text, styles.get("cover_value"))
+            row += 1
     row += 1
     ws.write_string(row, 0, "Cautions", styles.get("cover_label"))
     for line in CAUTION_LINES:
@@ -63,5 +79,8 @@ def _procedures(spec: Spec) -> str:
     if spec.wind is not None:
         parts.append("MWFRS wind, directional procedure (ASCE 7-16 ch. 27 Part 1)")
     if spec.wall_lines:
-        parts.append("flexible diaphragms by tributary area; shear walls (AWC SDPWS-2015)")
+        parts.append(
+            "flexible diaphragms by tributary area, overhangs continuous over their line; "
+            "shear walls (AWC SDPWS-2015)"
+        )
     return "; ".join(parts)

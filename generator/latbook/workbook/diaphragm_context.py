@@ -107,9 +107,23 @@ def _case_rows(spec: Spec, level, d) -> dict[str, Rows]:
     t_edge, c_edge = CHORD_EDGES[d]
     span_rows: Rows = []
     diag_rows: Rows = []
-    for sp in spans:
+    cant_rows: Rows = []
+    for i, sp in enumerate(spans):
         kind_text = "simple" if sp.kind == "simple" else "cantilever"
         simple = sp.kind == "simple"
+        variants = [sp.kind]
+        if simple and i > 0 and spans[i - 1].kind == "cantilever_start":
+            variants.append("after_cant")
+        if simple and i + 1 < len(spans) and spans[i + 1].kind == "cantilever_end":
+            variants.append("before_cant")
+        if not simple:
+            cant_rows.append(
+                {
+                    "span": str(sp.number),
+                    "span_label": sp.label,
+                    "row_label": f"overhang {sp.label}",
+                }
+            )
         span_rows.append(
             {
                 "span": str(sp.number),
@@ -119,7 +133,7 @@ def _case_rows(spec: Spec, level, d) -> dict[str, Rows]:
                 "right": sp.right or "",
                 "T_edge_span": t_edge if simple else c_edge,
                 "C_edge_span": c_edge if simple else t_edge,
-                "variants": [sp.kind],
+                "variants": variants,
                 "row_label": f"span {sp.label}",
             }
         )
@@ -157,13 +171,15 @@ def _case_rows(spec: Spec, level, d) -> dict[str, Rows]:
                 "row_label": f"line {ln.id}",
             }
         )
-        for p in points:
+        for p, prev in zip(points, [None, *points[:-1]], strict=True):
+            wall = _wall_under(ln.story.segments, prev.s_ft, p.s_ft) if p.after_wall else None
             coll_rows.append(
                 {
                     "key": f"{ln.id}.{p.index}",
                     "line": ln.id,
                     "at_label": p.label,
                     "bp": p.index,
+                    "wseg": f"{ln.id}.{wall.id}" if wall is not None else "",
                     "seg_key": f"{ln.id}.{level.id}.{p.segment.id}" if p.segment else "",
                     "variants": [p.at, *(["after_wall"] if p.after_wall else [])],
                     "row_label": f"line {ln.id}, {p.label}",
@@ -174,4 +190,14 @@ def _case_rows(spec: Spec, level, d) -> dict[str, Rows]:
         f"lines_{suffix}": line_rows,
         f"collector_{suffix}": coll_rows,
         f"diag_{suffix}": diag_rows,
+        f"cant_{suffix}": cant_rows,
     }
+
+
+def _wall_under(segments, s0_ft: float, s1_ft: float):
+    """The segment that covers the stretch s0..s1 of a line (collector breakpoints)."""
+    mid = (s0_ft + s1_ft) / 2.0
+    for seg in segments:
+        if seg.start_ft <= mid <= seg.start_ft + seg.length_ft:
+            return seg
+    raise AssertionError("a stretch marked as within a wall has no wall")

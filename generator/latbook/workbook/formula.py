@@ -6,7 +6,7 @@ direction). Then each `{reference}` becomes a cell or range:
   {field}              this table, this row, column `field`
   {tbl.field}          table `tbl`, the row whose key equals this row's context value
                        for tbl's key; `{tbl.field@ctxname}` takes the key from ctx[ctxname]
-  {prev:field}         this table, the row above
+  {prev:field}         this table, the row above ({next:field}: the row below)
   {col:field}          this table, every data row of the column (also {col:tbl.field})
   {upto:field}         this table, first data row down to this row
   {first:tbl.field}    first / last data row of a column ({last:...})
@@ -103,6 +103,11 @@ def render(
             r = this_row() - 1
             if r < tpos.first_row:
                 raise TemplateError(f"'{{{body}}}' on the first row of '{tpos.name}'")
+            return ref(tpos, r, field)
+        if op == "next":
+            r = this_row() + 1
+            if r > tpos.last_row:
+                raise TemplateError(f"'{{{body}}}' on the last row of '{tpos.name}'")
             return ref(tpos, r, field)
         if op == "col":
             return span(tpos, tpos.first_row, tpos.last_row, field)

@@ -73,6 +73,8 @@ def _place_blocks(plan: SheetPlan, context: Context, registry: Registry) -> None
     for block in plan.template.blocks:
         if not context.holds(block.when):
             continue
+        if block.skip_empty and not context.collections[substitute_ctx(block.over or "", plan.ctx)]:
+            continue
         if block.kind == "scalars":
             row = _place_scalars(plan, block, context, registry, row)
         elif block.kind == "table":

@@ -66,6 +66,8 @@ class Block:
     columns: tuple[Column, ...] = ()
     text: str = ""
     chart: dict[str, Any] | None = None
+    skip_empty: bool = False
+    """A table block left out where its collection has no rows (e.g. a plan with no overhang)."""
 
 
 @dataclass(frozen=True)

@@ -26,7 +26,8 @@ def wall_collections(spec: Spec) -> dict[str, Rows]:
     if not spec.wall_lines:
         return {}
     out: dict[str, Rows] = {"wall_stories": [], "drift_rows": []}
-    for story in wall_stories(spec):
+    stories = wall_stories(spec)
+    for story in stories:
         lv = story.level.id
         story_ctx = {
             "level": lv,
@@ -37,7 +38,7 @@ def wall_collections(spec: Spec) -> dict[str, Rows]:
         out["wall_stories"].append(story_ctx)
         out[f"wall_story_{lv}"] = [story_ctx]
         out[f"wall_lines_{lv}"] = _line_rows(story)
-        out[f"wall_segs_{lv}"] = _segment_rows(story)
+        out[f"wall_segs_{lv}"] = _segment_rows(story, top=story is stories[0])
         out["drift_rows"] += [
             {
                 "level": lv,
@@ -89,11 +90,11 @@ def _line_rows(story: StoryPlace) -> Rows:
     ]
 
 
-def _segment_rows(story: StoryPlace) -> Rows:
+def _segment_rows(story: StoryPlace, top: bool) -> Rows:
     rows: Rows = []
     for ln in story.lines:
         for seg in ln.segments:
-            variants = []
+            variants = ["top"] if top else []
             if seg.segment_index == 0:
                 variants.append("first_in_line")
             if seg.stacked_from_above:

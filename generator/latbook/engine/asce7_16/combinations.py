@@ -114,7 +114,20 @@ def Emh(Omega0: float, QE: float) -> float:
     return Omega0 * QE
 
 
+def number_text(x: float) -> str:
+    """A factor as the workbook prints it in a combination's name, TEXT(x, "0.0#"): two
+    decimals with one trailing zero dropped ("3.0", "2.5", "2.25")."""
+    text = f"{x:.2f}"
+    return text[:-1] if text.endswith("0") else text
+
+
+def rho_text(rho: float) -> str:
+    """ρ as printed in a combination's name: "1.0" or "1.3" (ASCE 7-16 §12.3.4)."""
+    return "1.3" if math.isclose(validate_redundancy_factor(rho), 1.3) else "1.0"
+
+
 def _asd_factors(SDS_g: float, rho: float, Omega0: float) -> LateralFactors:
+    r, om = rho_text(rho), number_text(Omega0)
     return LateralFactors(
         method="ASD",
         wind_lateral=0.6,
@@ -127,21 +140,24 @@ def _asd_factors(SDS_g: float, rho: float, Omega0: float) -> LateralFactors:
         wind_additive_name="ASD D + 0.6W (ASCE 7-16 §2.4.1, comb. 5)",
         wind_resisting_name="ASD 0.6D + 0.6W (ASCE 7-16 §2.4.1, comb. 7)",
         seismic_additive_name=(
-            "ASD (1.0 + 0.14SDS)D + 0.7ρQE (ASCE 7-16 §2.4.5, comb. 8; §12.4.2)"
+            f"ASD (1.0 + 0.14SDS)D + 0.7ρQE, ρ = {r} (ASCE 7-16 §2.4.5, comb. 8; §12.4.2)"
         ),
         seismic_resisting_name=(
-            "ASD (0.6 - 0.14SDS)D + 0.7ρQE (ASCE 7-16 §2.4.5, comb. 10; §12.4.2)"
+            f"ASD (0.6 - 0.14SDS)D + 0.7ρQE, ρ = {r} (ASCE 7-16 §2.4.5, comb. 10; §12.4.2)"
         ),
         overstrength_additive_name=(
-            "ASD (1.0 + 0.14SDS)D + 0.7Ω0QE (ASCE 7-16 §2.4.5, comb. 8 with Em; §12.4.3)"
+            f"ASD (1.0 + 0.14SDS)D + 0.7Ω0QE, Ω0 = {om} (ASCE 7-16 §2.4.5, comb. 8 with Em; "
+            "§12.4.3)"
         ),
         overstrength_resisting_name=(
-            "ASD (0.6 - 0.14SDS)D + 0.7Ω0QE (ASCE 7-16 §2.4.5, comb. 10 with Em; §12.4.3)"
+            f"ASD (0.6 - 0.14SDS)D + 0.7Ω0QE, Ω0 = {om} (ASCE 7-16 §2.4.5, comb. 10 with Em; "
+            "§12.4.3)"
         ),
     )
 
 
 def _lrfd_factors(SDS_g: float, rho: float, Omega0: float) -> LateralFactors:
+    r, om = rho_text(rho), number_text(Omega0)
     return LateralFactors(
         method="LRFD",
         wind_lateral=1.0,
@@ -154,16 +170,18 @@ def _lrfd_factors(SDS_g: float, rho: float, Omega0: float) -> LateralFactors:
         wind_additive_name="LRFD 1.2D + 1.0W + L + 0.5(Lr or S or R) (ASCE 7-16 §2.3.1, comb. 4)",
         wind_resisting_name="LRFD 0.9D + 1.0W (ASCE 7-16 §2.3.1, comb. 5)",
         seismic_additive_name=(
-            "LRFD (1.2 + 0.2SDS)D + 1.0ρQE + L + 0.2S (ASCE 7-16 §2.3.6, comb. 6; §12.4.2)"
+            f"LRFD (1.2 + 0.2SDS)D + 1.0ρQE + L + 0.2S, ρ = {r} (ASCE 7-16 §2.3.6, comb. 6; "
+            "§12.4.2)"
         ),
         seismic_resisting_name=(
-            "LRFD (0.9 - 0.2SDS)D + 1.0ρQE (ASCE 7-16 §2.3.6, comb. 7; §12.4.2)"
+            f"LRFD (0.9 - 0.2SDS)D + 1.0ρQE, ρ = {r} (ASCE 7-16 §2.3.6, comb. 7; §12.4.2)"
         ),
         overstrength_additive_name=(
-            "LRFD (1.2 + 0.2SDS)D + Ω0QE + L + 0.2S (ASCE 7-16 §2.3.6, comb. 6 with Em; §12.4.3)"
+            f"LRFD (1.2 + 0.2SDS)D + Ω0QE + L + 0.2S, Ω0 = {om} (ASCE 7-16 §2.3.6, comb. 6 "
+            "with Em; §12.4.3)"
         ),
         overstrength_resisting_name=(
-            "LRFD (0.9 - 0.2SDS)D + Ω0QE (ASCE 7-16 §2.3.6, comb. 7 with Em; §12.4.3)"
+            f"LRFD (0.9 - 0.2SDS)D + Ω0QE, Ω0 = {om} (ASCE 7-16 §2.3.6, comb. 7 with Em; §12.4.3)"
         ),
     )
 
