@@ -108,13 +108,15 @@ def test_omega0_reduction_needs_omega0_of_2_5(tmp_path, capsys):
 
 
 def test_site_specific_study_refused(tmp_path, capsys):
-    # ASCE 7-16 Table 11.4-1: site class E with Ss >= 1.0 says "See Section 11.4.8" (from memory).
-    data = _set(
-        _set(demo(), "seismic.ground_motion.site_class", "E"), "seismic.ground_motion.Ss_g", 1.2
-    )
+    # ASCE 7-16 §11.4.8: Site E with S1 >= 0.2 g needs a site-specific study unless T <= Ts
+    # (exception 3, from memory). Derived: Ss 3.0 (Fa of Site C, 1.2, by exception 1) gives
+    # SDS = 2.4 g; S1 = 0.2 (Fv 3.3) gives SD1 = 0.44 g; Ts = 0.18 s < Ta = 0.27 s.
+    data = _set(demo(), "seismic.ground_motion.site_class", "E")
+    data = _set(_set(data, "seismic.ground_motion.Ss_g", 3.0), "seismic.ground_motion.S1_g", 0.2)
     code, err, out = run_build(data, tmp_path, capsys)
     assert code == 2
-    assert "$.seismic.ground_motion.Ss_g" in err and "11.4.8" in err
+    assert "$.seismic.ground_motion.S1_g" in err and "11.4.8" in err
+    assert "[site_specific]" in err and "method = direct" in err
     assert out.read_bytes() == SENTINEL
 
 

@@ -49,14 +49,23 @@ _NAME_TOKEN = re.compile(r"(?<![\w.$!:])([A-Za-z_][\w.]*)(?![\w.(!])")
 _CELL_REF = re.compile(r"^[A-Za-z]{1,3}\d+$")
 
 
+# Seismic-basis cases of tests/test_parity_generated.py: §12.8.1.3 rows, Site E with a mixed
+# takeoff, perimeter-bay rho and a declared irregularity.
+BASIS = ["siteA-S1-0.7-Ss-limit", "siteE-S1-0.3-mixed-perimeter"]
+
+
 def _spec_data(case: str) -> dict:
+    if case in BASIS:
+        from tests.test_parity_generated import basis_spec
+
+        return basis_spec(case)
     if case in GENERATED:
         opts = dict(GENERATED[case])
         return make_spec(random.Random(opts.pop("seed")), **opts)
     return json.loads(Path(case).read_text(encoding="utf-8"))
 
 
-CASES = [str(p) for p in EXAMPLES] + list(GENERATED)
+CASES = [str(p) for p in EXAMPLES] + list(GENERATED) + BASIS
 
 
 def _case_id(case: str) -> str:

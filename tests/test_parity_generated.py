@@ -18,6 +18,7 @@ from hypothesis import HealthCheck, given, settings
 
 from latbook.analysis import compute_results
 from latbook.build import build_workbook
+from latbook.engine.asce7_16 import elf
 from latbook.spec.load import parse_spec
 from latbook.workbook.builder import layout
 from tests.helpers.evaluator import evaluate_workbook
@@ -65,6 +66,96 @@ def test_fixed_generated_building_parity(seed, n_levels, n_lines, seismic, wind,
         random.Random(seed), n_levels, n_lines, seismic=seismic, wind=wind, design_method=method
     )
     assert_parity(spec, tmp_path / "calc.xlsx")
+
+
+# Seismic basis cases (ASCE 7-16 §11.4.8, §12.7.2, §12.3.4, §12.8.1.3): site classes A to E with
+# S1 on both sides of 0.2 g and 0.6 g, takeoff and typed weights mixed, rho both ways.
+SITE = "site_class"
+BASIS_CASES = {
+    "siteD-S1-0.6-takeoff-removal": dict(
+        seed=21,
+        n_levels=1,
+        site={"site_class": "D", "Ss_g": 1.5, "S1_g": 0.6},
+        rho_method="removal_test",
+        takeoff="all",
+        design_method="LRFD",
+    ),
+    "siteE-S1-0.3-mixed-perimeter": dict(
+        seed=22,
+        n_levels=2,
+        site={"site_class": "E", "Ss_g": 1.2, "S1_g": 0.3},
+        rho_method="perimeter_bays",
+        takeoff="some",
+        design_method="ASD",
+        declare_H3=True,  # plan irregular: rho = 1.3 by (b), collectors +25 % (§12.3.3.4)
+    ),
+    "siteB-unmeasured-S1-0.1-typed": dict(
+        seed=23,
+        n_levels=1,
+        site={"site_class": "B", "Ss_g": 0.4, "S1_g": 0.1, "site_class_basis": "B_unmeasured_vs"},
+        rho_method="typed",
+        takeoff="none",
+        design_method="ASD",
+    ),
+    "siteA-S1-0.7-Ss-limit": dict(
+        seed=24,
+        n_levels=1,
+        site={"site_class": "A", "Ss_g": 2.2, "S1_g": 0.7},
+        rho_method="typed",
+        takeoff="all",
+        limit_Ss_for_Cs=True,
+        design_method="LRFD",
+    ),
+    # Ts = SD1/SDS = 0.29/2.0 = 0.15 s, so T > 1.5 Ts: exception 2 takes 1.5 x Eq. 12.8-3
+    "siteD-default-S1-0.2-exc2-long": dict(
+        seed=25,
+        n_levels=2,
+        site={"site_class": "D", "Ss_g": 3.0, "S1_g": 0.2, "site_class_basis": "default_D"},
+        rho_method="removal_test",
+        takeoff="some",
+        design_method="LRFD",
+        T_computed_s=0.5,
+    ),
+}
+EXPECTED_BRANCH = {
+    "siteD-S1-0.6-takeoff-removal": elf.EXC2_SHORT,
+    "siteD-default-S1-0.2-exc2-long": elf.EXC2_MID,
+}
+
+
+def basis_spec(case: str) -> dict:
+    opts = dict(BASIS_CASES[case])
+    seed, n_levels = opts.pop("seed"), opts.pop("n_levels")
+    t_computed = opts.pop("T_computed_s", None)
+    declare_h3 = opts.pop("declare_H3", False)
+    spec = make_spec(random.Random(seed), n_levels, 2, seismic=SITE, wind=False, **opts)
+    for key, value in opts["site"].items():
+        assert spec["seismic"]["ground_motion"][key] == value  # not changed by the generator
+    if declare_h3:
+        spec["seismic"]["declared_irregularities"] = {"diaphragm_discontinuity_3": True}
+        spec["seismic"]["collector_light_frame_exception"] = True
+    if t_computed is not None:
+        spec["seismic"]["T_computed_s"] = t_computed
+        spec["seismic"]["structure_type"] = "all_other"
+    return spec
+
+
+@pytest.mark.parametrize("case", list(BASIS_CASES))
+def test_seismic_basis_generated_parity(case, tmp_path):
+    spec = basis_spec(case)
+    assert_parity(spec, tmp_path / "calc.xlsx")
+    results = compute_results(parse_spec(spec))
+    expected_basis = {"typed": "typed", "removal_test": "(a)", "perimeter_bays": "(b)"}
+    method = spec["seismic"].get("rho_method", "typed")
+    assert results["seismic.rho_basis"].startswith(expected_basis[method])
+    if BASIS_CASES[case].get("declare_H3"):
+        assert results["seismic.SDC"] in ("D", "E", "F")
+        assert results["seismic.rho"] == 1.3 and results["irr.collector_factor"] == 1.25
+    if case in EXPECTED_BRANCH:
+        assert results["seismic.Cs_exc2_branch"] == EXPECTED_BRANCH[case]
+    if spec["seismic"].get("limit_Ss_for_Cs"):
+        Ss = spec["seismic"]["ground_motion"]["Ss_g"]
+        assert results["seismic.Ss_Cs"] == min(Ss, 1.5) and results["seismic.cap_ok"] == "yes"
 
 
 def test_longest_ids_parity(tmp_path):

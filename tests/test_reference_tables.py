@@ -14,27 +14,33 @@ TABLES = reference_tables()
 
 @pytest.mark.parametrize("site_class", ["A", "B", "C", "D", "E"])
 def test_fa_rows(site_class):
+    """Every tabulated cell equals the engine's; an untabulated one holds the standard's
+    "See §11.4.8" text in the workbook and None in the engine, never a number."""
     t = TABLES["Fa"]
     assert t["columns"] == list(site.TABLE_11_4_1_SS_G)
     row = t["values"][t["rows"].index(site_class)]
-    for ss, value in zip(t["columns"], row, strict=True):
-        assert value == pytest.approx(_engine_fa(site_class, ss), abs=1e-12)
-
-
-def _engine_fa(site_class: str, ss: float) -> float:
-    """Engine Fa; where §11.4.8 refuses (site E, Ss >= 1.0) both copies hold the last value."""
-    return site.Fa(site_class, 0.99 if site_class == "E" and ss >= 1.0 else ss)
+    for printed, value in zip(site.TABLE_11_4_1_FA[site_class], row, strict=True):
+        if printed is None:
+            assert value == "See §11.4.8"
+        else:
+            assert value == pytest.approx(printed, abs=1e-12)
 
 
 @pytest.mark.parametrize("site_class", ["A", "B", "C", "D", "E"])
 def test_fv_rows(site_class):
+    """Supplement No. 1 tabulates every Site A-E cell of Table 11.4-2."""
     t = TABLES["Fv"]
     assert t["columns"] == list(site.TABLE_11_4_2_S1_G)
-    printed = site.TABLE_11_4_2_FV[site_class]
     row = t["values"][t["rows"].index(site_class)]
-    for printed_value, value in zip(printed, row, strict=True):
-        if printed_value is not None:
-            assert value == pytest.approx(printed_value, abs=1e-12)
+    assert row == pytest.approx(list(site.TABLE_11_4_2_FV[site_class]), abs=1e-12)
+
+
+def test_site_tables_print_the_footnote_and_nothing_invented():
+    notes = " ".join(TABLES["Fv"]["notes"])
+    assert "used only for calculation of TS" in notes
+    assert all(isinstance(v, float) for row in TABLES["Fv"]["values"] for v in row)
+    texts = [v for row in TABLES["Fa"]["values"] for v in row if isinstance(v, str)]
+    assert texts == ["See §11.4.8"] * 3
 
 
 def test_importance_factors():

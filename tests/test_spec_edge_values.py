@@ -27,7 +27,8 @@ WEIGHT = "$.building.levels[0].seismic_weight_kip"
 
 
 def small_spec() -> dict:
-    return make_spec(random.Random(8), 1, 2, seismic="site_class", wind=True)
+    """One level, two lines each way, rho typed (an input cell the tests edit)."""
+    return make_spec(random.Random(8), 1, 2, seismic="site_class", wind=True, rho_method="typed")
 
 
 def run(tmp_path, capsys, command: str, raw: str) -> tuple[int, str]:
@@ -76,7 +77,7 @@ def _numeric_leaves(node, path="$"):
 
 
 def test_true_is_refused_for_every_number_of_the_spec():
-    base = make_spec(random.Random(7), 2, 2, seismic="site_class", wind=True)
+    base = make_spec(random.Random(7), 2, 2, seismic="site_class", wind=True, rho_method="typed")
     leaves = list(_numeric_leaves(base))
     assert "$.seismic.rho" in [p for p, _, _ in leaves]
     for path, _, _ in leaves:

@@ -222,3 +222,48 @@ def test_building_case_elf_chain():
     assert elf.story_shears(Fx, HEIGHTS_FT) == pytest.approx([24.615, 49.231, 61.538], rel=1e-4)
     assert elf.overturning_moments(Fx, HEIGHTS_FT) == pytest.approx([0.0, 246.15, 738.46], rel=1e-4)
     assert elf.base_overturning_moment(Fx, HEIGHTS_FT) == pytest.approx(1353.85, rel=1e-4)
+
+
+# --- ASCE 7-16 §11.4.8 exception 2 and §12.8.1.3 -------------------------------------------
+# Hand cases (derived) with SDS = 1.0, SD1 = 0.68 (Site D, Ss 1.5, S1 0.6), R = 6.5, Ie = 1.0:
+# Ts = 0.68 s, 1.5 Ts = 1.02 s.
+
+
+@pytest.mark.parametrize(
+    ("T_s", "TL_s", "expected", "branch"),
+    [
+        (0.25, 8.0, 1.0 / 6.5, elf.EXC2_SHORT),  # T <= 1.5 Ts: Eq. 12.8-2 = 0.1538
+        (1.02, 8.0, 1.0 / 6.5, elf.EXC2_SHORT),  # at 1.5 Ts exactly
+        (1.2, 8.0, 1.5 * 0.68 / (1.2 * 6.5), elf.EXC2_MID),  # 1.5 x Eq. 12.8-3 = 0.1308
+        (10.0, 8.0, 1.5 * 0.68 * 8.0 / (100.0 * 6.5), elf.EXC2_LONG),  # 1.5 x Eq. 12.8-4
+    ],
+)
+def test_Cs_exception_2_branches(T_s, TL_s, expected, branch):
+    value, got = elf.Cs_exception_2(1.0, 0.68, T_s, TL_s, 6.5, 1.0, 0.68)
+    assert value == pytest.approx(expected, rel=1e-12)
+    assert got == branch
+
+
+def test_Cs_exception_2_continuous_at_1_5_Ts():
+    # derived: 1.5 SD1 / (1.5 Ts R/Ie) = SDS / (R/Ie) at T = 1.5 Ts
+    below, _ = elf.Cs_exception_2(1.0, 0.68, 1.02, 8.0, 6.5, 1.0, 0.68)
+    above, _ = elf.Cs_exception_2(1.0, 0.68, 1.02 + 1e-9, 8.0, 6.5, 1.0, 0.68)
+    assert above == pytest.approx(below, rel=1e-8)
+
+
+def test_Cs_with_exception_2_drops_the_eq_12_8_3_cap_below_1_5_Ts():
+    # derived: T = 0.9 s <= 1.02 s -> Cs = Eq. 12.8-2 = 0.1538 although Eq. 12.8-3 gives
+    # 0.68 / (0.9 x 6.5) = 0.1162; without the exception Cs would be 0.1162
+    with_exc, label = elf.Cs(1.0, 0.68, 0.6, 0.9, 8.0, 6.5, 1.0, exception_2_Ts_s=0.68)
+    without, plain = elf.Cs(1.0, 0.68, 0.6, 0.9, 8.0, 6.5, 1.0)
+    assert with_exc == pytest.approx(1.0 / 6.5, rel=1e-12)
+    assert label == elf.EXC2_PREFIX + elf.EXC2_SHORT
+    assert without == pytest.approx(0.68 / (0.9 * 6.5), rel=1e-12)
+    assert plain == elf.LABEL_CS_UPPER_SHORT
+
+
+def test_Ss_for_Cs_limit_12_8_1_3():
+    # ASCE 7-16 §12.8.1.3 (from memory): Ss = 1.5 where permitted; unchanged otherwise
+    assert elf.Ss_for_Cs(2.1, True) == 1.5
+    assert elf.Ss_for_Cs(1.2, True) == 1.2
+    assert elf.Ss_for_Cs(2.1, False) == 2.1

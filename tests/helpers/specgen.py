@@ -13,7 +13,13 @@ What a generated building looks like (invented data, for tests and demos only):
   first two run the full height (so every level has two lines each way), the others stop
   at a random level and are continuous from there down to the base;
 - per line 1-4 segments stacked at the same places in every story, 0-3 openings per
-  story in the gaps between them.
+  story in the gaps between them;
+- seismic weight typed, or taken off (areas, walls, partitions, snow, storage, equipment)
+  for some levels; site classes A-E with S1 on both sides of 0.2 g and 0.6 g (Site E at
+  S1 >= 0.2 g only where T <= Ts, §11.4.8 exception 3); rho typed, by the removal test or by
+  perimeter bays; now and then §12.8.1.3 (kept only where its conditions hold).
+New choices come from side streams seeded by earlier draws, so the main stream of a seed
+draws the same numbers as before.
 
 `extreme=True` stretches a valid spec to the edges of what the spec allows: seismic weights
 spread log-uniformly from 1e-9 to 1e6 kip, every float nudged up by a few units in the last
@@ -57,10 +63,18 @@ def make_spec(
     long_ids: bool = False,
     text: str | None = None,
     extreme: bool = False,
+    site: dict[str, Any] | None = None,
+    rho_method: str | None = None,
+    takeoff: str | None = None,
+    limit_Ss_for_Cs: bool | None = None,
 ) -> dict[str, Any]:
     """A valid spec as JSON data.
 
     seismic: "site_class", "direct", None (no seismic block) or "random".
+    site: ground-motion fields to force (site_class, Ss_g, S1_g, site_class_basis).
+    rho_method: "typed", "removal_test", "perimeter_bays" or None (random).
+    takeoff: "all", "some", "none" or None (random per level) weight takeoffs.
+    limit_Ss_for_Cs: force the §12.8.1.3 option (True must then be valid) or None (random).
     wind: True / False / None (random; forced on when seismic is None).
     long_ids: every id 12 characters (the Identifier maximum), to stress sheet names.
     text: when given, every free-text field of the project holds it.
@@ -79,6 +93,7 @@ def make_spec(
 
     plan = _plan(rng)
     levels = _levels(rng, n_levels, plan, ids)
+    _weight_takeoffs(levels, plan, takeoff)
     order = level_order or rng.choice(("bottom_up", "top_down"))
     assemblies = _assemblies(rng, ids)
     dia_ids = [a["id"] for a in assemblies["diaphragms"]]
@@ -111,6 +126,7 @@ def make_spec(
     }
     if seismic is not None:
         spec["seismic"] = _seismic(rng, seismic)
+        _seismic_basis(spec, site, rho_method, limit_Ss_for_Cs)
     if wind:
         spec["wind"] = _wind(rng, top_ft)
     if extreme:
@@ -131,7 +147,11 @@ def _stretch(rng: random.Random, spec: dict[str, Any]) -> None:
     """Extreme weights, 17-digit floats and sheet-name level ids, keeping the spec valid."""
     lo, hi = (math.log10(w) for w in WEIGHT_RANGE_KIP)
     for level in spec["building"]["levels"]:
+        level.pop("weight_takeoff", None)  # a typed weight replaces any takeoff
         level["seismic_weight_kip"] = 10 ** rng.uniform(lo, hi)
+    if "seismic" in spec:
+        # weights that far apart make a mass irregularity: §12.8.1.3 no longer applies
+        spec["seismic"].pop("limit_Ss_for_Cs", None)
     _nudge_floats(rng, spec)
     ids = rng.sample(SHEET_PART_IDS, k=min(len(SHEET_PART_IDS), len(spec["building"]["levels"])))
     for level, new in zip(list(spec["building"]["levels"]), ids, strict=False):
@@ -416,15 +436,123 @@ def _segment(rng, seg_id, start_ft, length_ft, wall_ids, has_story_below) -> dic
     return segment
 
 
+def _weight_takeoffs(levels: list[dict[str, Any]], plan: dict[str, float], mode) -> None:
+    """Replace the typed weight of some levels by a takeoff (§12.7.2), from side streams."""
+    area = (plan["x_max_ft"] - plan["x_min_ft"]) * (plan["y_max_ft"] - plan["y_min_ft"])
+    perimeter = 2 * (plan["x_max_ft"] - plan["x_min_ft"] + plan["y_max_ft"] - plan["y_min_ft"])
+    for i, level in enumerate(levels):
+        side = random.Random(f"takeoff|{level['id']}|{level['elevation_ft']}")
+        on = {"all": True, "none": False, "some": i % 2 == 0}.get(mode, side.random() < 0.35)
+        if not on:
+            continue
+        top = i == len(levels) - 1
+        t: dict[str, Any] = {
+            "areas": [
+                {
+                    "name": "roof" if top else "floor",
+                    "dead_psf": _r(side.uniform(8, 25), 1),
+                    "area_sf": _r(area, 1),
+                }
+            ],
+            "walls": [
+                {
+                    "name": "exterior walls",
+                    "kind": "exterior",
+                    "dead_psf": _r(side.uniform(8, 18), 1),
+                    "length_ft": _r(perimeter, 1),
+                }
+            ],
+        }
+        if side.random() < 0.5:
+            t["areas"].append(
+                {"name": "ceiling", "dead_psf": _r(side.uniform(2, 6), 1), "area_sf": _r(area, 1)}
+            )
+        if side.random() < 0.5:
+            t["walls"].append(
+                {
+                    "name": "interior walls",
+                    "kind": "interior",
+                    "dead_psf": _r(side.uniform(6, 10), 1),
+                    "length_ft": _r(side.uniform(0.3, 1.0) * perimeter, 1),
+                }
+            )
+        if top and side.random() < 0.4:
+            t["walls"][0]["parapet_height_ft"] = _r(side.uniform(1.0, 4.0), 2)
+        if not top and side.random() < 0.5:
+            t["partitions"] = {"actual_psf": _r(side.uniform(0, 15), 1), "area_sf": _r(area, 1)}
+        if top and side.random() < 0.5:
+            t["snow"] = {"pf_psf": _r(side.uniform(15, 60), 1), "area_sf": _r(area, 1)}
+        if side.random() < 0.15:
+            t["storage"] = {"live_psf": 125.0, "area_sf": _r(side.uniform(0.05, 0.3) * area, 1)}
+        if side.random() < 0.2:
+            t["equipment"] = [{"name": "unit", "weight_kip": _r(side.uniform(1, 20), 2)}]
+        del level["seismic_weight_kip"]
+        level["weight_takeoff"] = t
+
+
+def _seismic_basis(spec, site, rho_method, limit_Ss_for_Cs) -> None:
+    """Site class basis, rho method, declarations and §12.8.1.3 from a side stream; Site E at
+    S1 >= 0.2 g kept only where §11.4.8 exception 3 holds (T <= Ts)."""
+    s = spec["seismic"]
+    gm = s["ground_motion"]
+    side = random.Random(f"basis|{sorted(gm.items())}|{s['TL_s']}")
+    if gm["method"] == "site_class":
+        if gm["site_class"] == "D" and side.random() < 0.3:
+            gm["site_class_basis"] = "default_D"
+        if gm["site_class"] == "B" and side.random() < 0.3:
+            gm["site_class_basis"] = "B_unmeasured_vs"
+        gm.update(site or {})
+    method = rho_method or side.choice(("typed", "typed", "removal_test", "perimeter_bays"))
+    if method != "typed":
+        s["rho_method"] = method
+        del s["rho"]
+    if side.random() < 0.15:
+        s["declared_irregularities"] = {
+            "diaphragm_discontinuity_3": side.random() < 0.5,
+            "vertical_geometric_3": side.random() < 0.5,
+        }
+    exc3 = gm["method"] == "site_class" and gm["site_class"] == "E" and gm["S1_g"] >= 0.2
+    if exc3 and not _exception_3_holds(spec):
+        gm["S1_g"] = 0.19
+    want = limit_Ss_for_Cs if limit_Ss_for_Cs is not None else side.random() < 0.2
+    if want and gm["method"] == "site_class" and gm["site_class"] != "E":
+        s["limit_Ss_for_Cs"] = True
+        spec["building"]["risk_category"] = side.choice(("I", "II"))
+        if "rho" in s:
+            s["rho"] = 1.0
+        if limit_Ss_for_Cs is None and not _valid(spec):
+            del s["limit_Ss_for_Cs"]
+
+
+def _exception_3_holds(spec) -> bool:
+    from latbook.problems import SpecError
+    from latbook.spec.load import parse_spec
+
+    try:
+        parse_spec(spec)
+    except SpecError as exc:
+        return not any("exception 3 needs T <= Ts" in p.message for p in exc.problems)
+    return True
+
+
+def _valid(spec) -> bool:
+    from latbook.problems import SpecError
+    from latbook.spec.load import parse_spec
+
+    try:
+        parse_spec(spec)
+    except SpecError:
+        return False
+    return True
+
+
 # --- loads and project ---------------------------------------------------------------------
 
 
 def _seismic(rng, method: str) -> dict[str, Any]:
     if method == "site_class":
         site_class = rng.choice(SITE_CLASSES)
-        # ASCE 7-16 §11.4.8: the spec rules refuse D/E with S1 >= 0.2 g and E with Ss >= 1.0 g.
-        s1_max = 0.19 if site_class in ("D", "E") else 0.8
-        ss_max = 0.95 if site_class == "E" else 2.5
+        s1_max, ss_max = 0.8, 2.5  # Site E at S1 >= 0.2 g is checked in _seismic_basis
         motion = {
             "method": "site_class",
             "Ss_g": _r(rng.uniform(0.05, ss_max), 3),

@@ -15,6 +15,7 @@ from latbook.analysis.seismic import seismic_results
 from latbook.analysis.shear_walls import shear_wall_results
 from latbook.analysis.story_drift import drift_results
 from latbook.analysis.summary import summary_results
+from latbook.analysis.weights import weight_results
 from latbook.analysis.wind import wind_results
 from latbook.spec.models import Spec
 
@@ -22,6 +23,7 @@ Results = dict[str, Any]
 
 STEPS = [
     input_results,
+    weight_results,
     seismic_results,
     wind_results,
     combination_results,

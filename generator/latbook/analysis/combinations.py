@@ -112,7 +112,7 @@ def combination_results(spec: Spec, out: dict[str, Any]) -> None:
         q["Fac_D_W_add"] = f.wind_dead_additive
         q["Fac_D_W"] = f.wind_dead_resisting
     if spec.seismic is not None:
-        SDS_g, rho = out["seismic.SDS"], spec.seismic.rho
+        SDS_g, rho = out["seismic.SDS"], out["seismic.rho"]
         Omega0 = collectors.omega0_used(
             spec.seismic.system.Omega0, spec.seismic.omega0_flexible_diaphragm_reduction
         )

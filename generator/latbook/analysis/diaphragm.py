@@ -289,9 +289,10 @@ def _case_results(
                     fac_Em * w["fpx_max"] * share,
                     fac_E_dia * w["fpx_min"] * share,
                 )
-            else:
+            else:  # §12.3.3.4: +25 % on the §12.10.1.1 force where an irregularity calls for it
+                fac_irr = out.get("irr.collector_factor", 1.0)
                 r["R_coll_E"] = collectors.collector_force_basic_lb(
-                    fac_E * abs(r["R_seis"]), fac_E_dia * abs(r["R_seis_fpx"])
+                    fac_E * abs(r["R_seis"]), fac_E_dia * fac_irr * abs(r["R_seis_fpx"])
                 )
         if wind:
             r["R_coll_W"] = fac_W * r["R_wind"]

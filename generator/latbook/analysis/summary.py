@@ -115,6 +115,37 @@ def design_choices(spec: Spec, out: dict[str, Any]) -> dict[str, str]:
     return texts
 
 
+def _basis_results(spec: Spec, out: dict[str, Any]) -> None:
+    """The Summary's seismic-basis rows: options, assumptions and declarations (live copies of
+    the Seismic and Regularity cells)."""
+    s = spec.seismic
+    if s is None:
+        return
+    q: dict[str, Any] = {}
+    gm = s.ground_motion
+    q["exc1"] = out["seismic.exc1"]
+    if gm.method == "site_class":
+        q["site"] = gm.site_class_basis
+        q["exc2"] = out["seismic.Cs_exc2_branch"]
+        q["exc3"] = out["seismic.exc3"]
+        q["fv_note"] = out["seismic.Fv_note"]
+        hold = gm.site_class == "E" and 0.75 < gm.Ss_g < 1.0
+        q["fa_hold"] = "1.3 held (no Site E value at Ss = 1.0 g): assumption" if hold else "-"
+    q["ss_cap"] = out["seismic.cap_ok"] if s.limit_Ss_for_Cs else "not taken"
+    q["rho"] = out["seismic.rho_basis"]
+    q["rho_value"] = out["seismic.rho"]
+    q["irregular"] = (
+        "present: see the Regularity sheet"
+        if out["irr.any"] == "yes"
+        else "none checked or declared (Regularity sheet)"
+    )
+    declared = any(out[f"irr.{t}.declared"] for t in ("H1a", "H1b", "H3", "V3"))
+    q["declared"] = "one or more declared present" if declared else "all declared not present"
+    q["collector"] = out["irr.collector_25"]
+    for key, value in q.items():
+        out[f"summary.basis.{key}"] = value
+
+
 def summary_results(spec: Spec, out: dict[str, Any]) -> None:
     """Every Summary quantity; nothing when the spec has no wall lines."""
     items = summary_items(spec)
@@ -123,6 +154,7 @@ def summary_results(spec: Spec, out: dict[str, Any]) -> None:
     for key, text in design_choices(spec, out).items():
         if key in LIVE_CHOICES:
             out[f"summary.choice.{key}"] = text
+    _basis_results(spec, out)
     dcrs: list[float] = []
     for item in items:
         element, demand, dcr = _element_and_values(item, out)

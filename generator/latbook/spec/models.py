@@ -83,13 +83,87 @@ class Plan(_Strict):
         return self
 
 
+Psf = Annotated[float, Field(ge=0, le=2000)]
+AreaSf = Annotated[float, Field(gt=0, le=1.0e7)]
+
+
+class AreaWeight(_Strict):
+    """A named area load at the level (roof, floor, ceiling...): dead psf x area."""
+
+    name: Text = Field(min_length=1)
+    dead_psf: Psf
+    area_sf: AreaSf
+
+
+class WallWeight(_Strict):
+    """Walls at the level: psf of wall surface x tributary height x length. The tributary
+    height is half the story below plus half the story above (ASCE 7-16 §12.7.2), plus a
+    parapet at the highest level."""
+
+    name: Text = Field(min_length=1)
+    kind: Literal["exterior", "interior"]
+    dead_psf: Psf
+    length_ft: Annotated[float, Field(gt=0, le=1.0e5)]
+    parapet_height_ft: Annotated[float, Field(ge=0, le=20)] = Field(
+        0.0, description="Parapet above the highest level (only there), ft."
+    )
+
+
+class PartitionWeight(_Strict):
+    """Partitions where provision for them is made (ASCE 7-16 §12.7.2 item 2): the actual
+    weight or 10 psf of floor area, whichever is greater."""
+
+    actual_psf: Psf
+    area_sf: AreaSf
+
+
+class SnowWeight(_Strict):
+    """Flat roof snow load pf (ASCE 7-16 §12.7.2 item 4): 20 % of it where pf > 30 psf."""
+
+    pf_psf: Psf
+    area_sf: AreaSf
+
+
+class StorageWeight(_Strict):
+    """Floor live load of storage areas (ASCE 7-16 §12.7.2 item 1): 25 % of it is included
+    (exceptions a and b of item 1 not taken)."""
+
+    live_psf: Psf
+    area_sf: AreaSf
+
+
+class EquipmentWeight(_Strict):
+    """Permanent equipment (ASCE 7-16 §12.7.2 item 3), kip."""
+
+    name: Text = Field(min_length=1)
+    weight_kip: Annotated[float, Field(ge=0, le=1.0e5)]
+
+
+class WeightTakeoff(_Strict):
+    """The level's effective seismic weight w_x as the sum of its parts, ASCE 7-16 §12.7.2."""
+
+    areas: list[AreaWeight] = Field(default_factory=list, max_length=40)
+    walls: list[WallWeight] = Field(default_factory=list, max_length=40)
+    partitions: PartitionWeight | None = Field(
+        None, description="Give where provision for partitions is made (§4.3.2)."
+    )
+    snow: SnowWeight | None = None
+    storage: StorageWeight | None = None
+    equipment: list[EquipmentWeight] = Field(default_factory=list, max_length=40)
+
+
 class Level(_Strict):
     """A diaphragm level: its elevation above the base, seismic weight and plan."""
 
     id: Identifier
     name: Text = ""
     elevation_ft: Annotated[float, Field(gt=0, le=400)]
-    seismic_weight_kip: Annotated[float, Field(gt=0, le=1.0e6)]
+    seismic_weight_kip: Annotated[float, Field(gt=0, le=1.0e6)] | None = Field(
+        None, description="Typed w_x; give this or weight_takeoff, not both."
+    )
+    weight_takeoff: WeightTakeoff | None = Field(
+        None, description="w_x from its parts (Weights sheet); give this or seismic_weight_kip."
+    )
     plan: Plan
     diaphragm_assembly: Identifier | None = Field(
         None, description="Id of an entry in assemblies.diaphragms."
@@ -113,6 +187,12 @@ class SiteClassMotion(_Strict):
     Ss_g: Annotated[float, Field(ge=0, le=5.0)]
     S1_g: Annotated[float, Field(ge=0, le=3.0)]
     site_class: Literal["A", "B", "C", "D", "E"]
+    site_class_basis: Literal["site_data", "default_D", "B_unmeasured_vs"] = Field(
+        "site_data",
+        description="'site_data': site class from ASCE 7-16 ch. 20; 'default_D': soil "
+        "properties not known, Site D by §11.4.3 (Fa not less than 1.2, §11.4.4); "
+        "'B_unmeasured_vs': Site B without measured shear-wave velocity (Fa = Fv = 1.0).",
+    )
 
 
 class DirectMotion(_Strict):
@@ -128,6 +208,16 @@ GroundMotion = Annotated[SiteClassMotion | DirectMotion, Field(discriminator="me
 
 
 TABLE_12_2_1_ENTRIES = ("A.15", "A.16", "A.17", "A.18", "B.22", "B.23", "B.24", "other")
+
+
+class IrregularityDeclarations(_Strict):
+    """Irregularities of ASCE 7-16 Tables 12.3-1 / 12.3-2 the tool cannot judge: the
+    designer's declaration (false: not present)."""
+
+    torsional_1a: bool = False
+    extreme_torsional_1b: bool = False
+    diaphragm_discontinuity_3: bool = False
+    vertical_geometric_3: bool = False
 
 
 class SeismicSystem(_Strict):
@@ -157,9 +247,23 @@ class Seismic(_Strict):
     T_computed_s: Annotated[float, Field(gt=0, le=10)] | None = Field(
         None, description="Period from a substantiated analysis; capped at Cu Ta."
     )
+    rho_method: Literal["typed", "removal_test", "perimeter_bays"] = Field(
+        "typed",
+        description="How rho is set: 'typed' (the designer's value, an override of §12.3.4), "
+        "'removal_test' (§12.3.4.2 a, Table 12.3-3) or 'perimeter_bays' (§12.3.4.2 b).",
+    )
     # a JSON true equals 1.0 in Python: refused before the literal check
     rho: Annotated[Literal[1.0, 1.3], BeforeValidator(not_a_boolean)] = Field(
-        1.0, description="Redundancy factor, ASCE 7-16 §12.3.4."
+        1.0, description="Redundancy factor typed by the designer (rho_method 'typed' only)."
+    )
+    limit_Ss_for_Cs: bool = Field(
+        False,
+        description="Take Ss = 1.5 in computing Cs (ASCE 7-16 §12.8.1.3); refused unless all "
+        "of its conditions hold.",
+    )
+    declared_irregularities: IrregularityDeclarations = Field(
+        default_factory=IrregularityDeclarations,
+        description="Irregularities this tool cannot judge, as declared by the designer.",
     )
     collector_light_frame_exception: bool | None = Field(
         None,

@@ -16,18 +16,22 @@ _EPS_FT = 1e-6
 def check_rules(spec: Spec) -> list[Problem]:
     """Every cross-field problem in `spec`, in document order. The rules on the walls story
     by story (stacking, line positions, aspect ratios) read story heights and the story
-    below each story, so they run once every other rule holds."""
+    below each story, so they run once every other rule holds; the rules that need the seismic
+    analysis (§11.4.8 exception 3, §12.8.1.3) run last."""
     problems = [
         *_levels(spec),
         *_sheet_names(spec),
+        *_level_weights(spec),
         *_assembly_ids(spec),
         *_wall_lines(spec),
         *_wind(spec),
         *_seismic(spec),
     ]
-    if problems or not spec.wall_lines:
-        return problems
-    return [*_stacking(spec), *_distinct_positions(spec), *_some_segment_qualifies(spec)]
+    if not problems and spec.wall_lines:
+        problems += [*_stacking(spec), *_distinct_positions(spec), *_some_segment_qualifies(spec)]
+    if not problems:
+        problems += _seismic_analysis(spec)
+    return problems
 
 
 def _levels(spec: Spec) -> Iterator[Problem]:
@@ -326,28 +330,134 @@ def _wind(spec: Spec) -> Iterator[Problem]:
         )
 
 
+def _level_weights(spec: Spec) -> Iterator[Problem]:
+    """ASCE 7-16 §12.7.2: each level's w_x is typed or taken off, never both."""
+    top = max(spec.building.levels, key=lambda lv: lv.elevation_ft).id
+    for i, level in enumerate(spec.building.levels):
+        base = ("building", "levels", i)
+        t = level.weight_takeoff
+        if t is not None and level.seismic_weight_kip is not None:
+            yield Problem(
+                json_path((*base, "weight_takeoff")),
+                "one_weight",
+                "give either seismic_weight_kip or weight_takeoff for a level, not both",
+            )
+        elif t is None and level.seismic_weight_kip is None:
+            yield Problem(
+                json_path((*base, "seismic_weight_kip")),
+                "required",
+                "give seismic_weight_kip or a weight_takeoff for the level",
+            )
+        if t is None:
+            continue
+        if level.seismic_weight_kip is None:
+            from latbook.analysis.weights import takeoff_parts_kip
+
+            if sum(takeoff_parts_kip(spec, level).values()) <= 0:
+                yield Problem(
+                    json_path((*base, "weight_takeoff")),
+                    "positive",
+                    "the takeoff sums to zero: a level needs a seismic weight above 0 kip",
+                )
+        for wi, wall in enumerate(t.walls):
+            if wall.parapet_height_ft > 0 and level.id != top:
+                yield Problem(
+                    json_path((*base, "weight_takeoff", "walls", wi, "parapet_height_ft")),
+                    "parapet",
+                    "a parapet is added to the walls of the highest level only",
+                )
+
+
 def _seismic(spec: Spec) -> Iterator[Problem]:
-    if spec.seismic is None:
+    s = spec.seismic
+    if s is None:
         return
-    if spec.seismic.omega0_flexible_diaphragm_reduction and spec.seismic.system.Omega0 < 2.5:
+    if s.omega0_flexible_diaphragm_reduction and s.system.Omega0 < 2.5:
         yield Problem(
             "$.seismic.omega0_flexible_diaphragm_reduction",
             "table_12_2_1_note_g",
             "Ω0 may be reduced by 0.5 for flexible diaphragms only where the tabulated Ω0 is "
             f"2.5 or more (ASCE 7-16 Table 12.2-1 note g); system.Omega0 is "
-            f"{spec.seismic.system.Omega0:g}",
+            f"{s.system.Omega0:g}",
         )
-    if spec.seismic.ground_motion.method != "site_class":
         return
-    from latbook.engine.asce7_16 import site
+    if s.rho_method != "typed" and "rho" in s.model_fields_set:
+        yield Problem(
+            "$.seismic.rho",
+            "rho_override",
+            f"rho is typed only with rho_method 'typed' (rho_method is '{s.rho_method}', "
+            "which determines rho per ASCE 7-16 §12.3.4.2)",
+        )
+    if s.rho_method != "typed" and not spec.wall_lines:
+        yield Problem(
+            "$.seismic.rho_method",
+            "needs_walls",
+            f"rho_method '{s.rho_method}' judges the shear walls: give wall_lines, or type rho",
+        )
+    gm = s.ground_motion
+    if s.limit_Ss_for_Cs and (gm.method != "site_class" or not spec.wall_lines):
+        yield Problem(
+            "$.seismic.limit_Ss_for_Cs",
+            "conditions",
+            "ASCE 7-16 §12.8.1.3 needs Ss (ground_motion.method 'site_class') and wall_lines "
+            "(to check regularity and rho)",
+        )
+    if gm.method != "site_class":
+        return
+    basis = gm.site_class_basis
+    if (basis == "default_D" and gm.site_class != "D") or (
+        basis == "B_unmeasured_vs" and gm.site_class != "B"
+    ):
+        yield Problem(
+            "$.seismic.ground_motion.site_class_basis",
+            "site_class_basis",
+            f"'{basis}' applies to site class {'D' if basis == 'default_D' else 'B'} only "
+            f"(site_class is '{gm.site_class}'; ASCE 7-16 §11.4.3)",
+        )
+
+
+def _seismic_analysis(spec: Spec) -> list[Problem]:
+    """Rules that need T, rho and the irregularity screen: §11.4.8 exception 3 and the
+    conditions of §12.8.1.3."""
+    if spec.seismic is None:
+        return []
+    from latbook.analysis.seismic import (
+        EXC3_NOT_MET,
+        SITE_STUDY_ADVICE,
+        seismic_results,
+        ss_cap_failures,
+    )
     from latbook.engine.errors import CodeLimitError
 
-    gm = spec.seismic.ground_motion
-    for field, call in (
-        ("Ss_g", lambda: site.Fa(gm.site_class, gm.Ss_g)),
-        ("S1_g", lambda: site.Fv(gm.site_class, gm.S1_g)),
-    ):
-        try:
-            call()
-        except CodeLimitError as exc:
-            yield Problem(f"$.seismic.ground_motion.{field}", "site_specific", str(exc))
+    out: dict = {}
+    try:
+        seismic_results(spec, out)
+    except CodeLimitError as exc:
+        if EXC3_NOT_MET not in str(exc):
+            raise
+        return [
+            Problem(
+                "$.seismic.ground_motion.S1_g",
+                "site_specific",
+                "site class E with S1 >= 0.2 g: ASCE 7-16 §11.4.8 exception 3 needs T <= Ts "
+                f"and T > Ts here; {SITE_STUDY_ADVICE}",
+            )
+        ]
+    failed = ss_cap_failures(out)
+    if not failed:
+        return []
+    text = {
+        "stories": "more than five stories above the base",
+        "T": "T > 0.5 s",
+        "rho": "rho is not 1.0",
+        "site": "site class E",
+        "rc": "risk category III or IV",
+        "regular": "an irregularity is present (Regularity sheet)",
+    }
+    return [
+        Problem(
+            "$.seismic.limit_Ss_for_Cs",
+            "conditions",
+            "ASCE 7-16 §12.8.1.3 does not apply: " + "; ".join(text[k] for k in failed),
+        )
+    ]

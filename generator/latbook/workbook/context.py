@@ -13,7 +13,9 @@ from latbook.analysis.combinations import combination_uses
 from latbook.analysis.wind import torsional_cases_apply
 from latbook.spec.models import Spec
 from latbook.workbook.diaphragm_context import diaphragm_collections, wall_input_collections
+from latbook.workbook.regularity_context import regularity_collections
 from latbook.workbook.wall_collections import wall_collections
+from latbook.workbook.weights_context import weight_collections, weight_flags
 
 
 @dataclass
@@ -43,6 +45,12 @@ def build_context(spec: Spec) -> Context:
         flags.add(f"motion_{spec.seismic.ground_motion.method}")
         if spec.seismic.T_computed_s is not None:
             flags.add("T_computed")
+        flags.add(f"rho_{spec.seismic.rho_method}")
+        if spec.seismic.limit_Ss_for_Cs:
+            flags.add("Ss_cap")
+        if spec.wall_lines:
+            flags.add("regularity")
+    flags |= weight_flags(spec)
     if spec.wind is not None:
         flags.add("wind")
         if torsional_cases_apply(spec):
@@ -72,7 +80,15 @@ def levels_collections(spec: Spec) -> dict[str, list[dict[str, Any]]]:
                 "row_label": f"level {level.id}",
                 "index": index,
                 "below": below,
-                "variants": [v for v, on in (("top", n == 0), ("lowest", below is None)) if on],
+                "variants": [
+                    v
+                    for v, on in (
+                        ("top", n == 0),
+                        ("lowest", below is None),
+                        ("takeoff", level.weight_takeoff is not None),
+                    )
+                    if on
+                ],
             }
         )
     return {"levels_top_down": rows}
@@ -102,4 +118,6 @@ COLLECTION_BUILDERS = [
     wall_input_collections,
     diaphragm_collections,
     wall_collections,
+    weight_collections,
+    regularity_collections,
 ]

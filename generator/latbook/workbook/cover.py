@@ -9,6 +9,7 @@ from xlsxwriter.worksheet import Worksheet
 from latbook import __version__
 from latbook.analysis.summary import design_choices
 from latbook.spec.models import Spec
+from latbook.workbook.assumptions import seismic_basis_lines
 from latbook.workbook.cautions import CAUTION_LINES
 from latbook.workbook.styles import Styles
 
@@ -23,7 +24,7 @@ def write_cover(
     results: dict[str, Any] | None = None,
 ) -> int:
     """Write the cover; returns the last row used."""
-    ws.set_column(0, 0, 24)
+    ws.set_column(0, 0, 30)
     ws.set_column(1, 1, 80)
     ws.write_string(0, 0, "Lateral force-resisting system calculation", styles.get("title"))
     p = spec.project
@@ -41,6 +42,7 @@ def write_cover(
         ("Wood standard", spec.code.wood),
         ("Design method", spec.design_method),
         ("Procedures", _procedures(spec)),
+        ("Seismic options and assumptions", "; ".join(seismic_basis_lines(spec))),
         ("Generator", f"latbook {__version__}"),
         ("Spec SHA-256", spec_sha256),
     ]

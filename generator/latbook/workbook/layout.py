@@ -63,6 +63,8 @@ def plan_sheets(
         for sheet_ctx in instances:
             name = substitute_ctx(tpl.name, sheet_ctx)
             plan = SheetPlan(name, substitute_ctx(tpl.title, sheet_ctx), tpl, dict(sheet_ctx))
+            if tpl.value_width:
+                plan.widths[COL_VALUE] = tpl.value_width
             _place_blocks(plan, context, registry)
             plans.append(plan)
     return plans

@@ -46,7 +46,9 @@ def _write_table(wb: Workbook, ws: Worksheet, t: dict[str, Any], row: int, style
     last = first + len(t["rows"]) - 1
     _define(wb, names["values"], first, 1, last, ncols)
     _define(wb, names["rows"], first, 0, last, 0)
-    return last + 1
+    for n, note in enumerate(t.get("notes", ()), start=1):
+        ws.write_string(last + n, 0, note, styles.get("note"))
+    return last + 1 + len(t.get("notes", ()))
 
 
 def _write_value(ws: Worksheet, row: int, col: int, value: Any, fmt) -> None:

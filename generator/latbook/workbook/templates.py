@@ -79,6 +79,7 @@ class SheetTemplate:
     when: str | None = None
     repeat: str | None = None
     landscape: bool = False
+    value_width: float | None = None  # width of the value column (long text results)
     blocks: tuple[Block, ...] = field(default_factory=tuple)
 
 

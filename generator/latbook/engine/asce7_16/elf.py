@@ -1,8 +1,8 @@
 """ASCE 7-16 §12.8: equivalent lateral force procedure (period, Cs, base shear, distribution).
 
 Table values from memory (ASCE 7-16 Tables 12.8-1 and 12.8-2).
-Not implemented here: the §12.8.1.3 Ss cap for regular short buildings, the §11.4.8 exception 2
-1.5 factor on Cs, and §12.8.4 horizontal distribution.
+Also here: Cs under §11.4.8 exception 2 (Site D, S1 >= 0.2 g) and the §12.8.1.3 limit on Ss for
+Cs. Not implemented: §12.8.4 horizontal distribution.
 """
 
 from itertools import accumulate
@@ -37,6 +37,18 @@ LABEL_CS_MIN_NEAR_FAULT = "Eq. 12.8-6"
 
 #: S1 (g) at or above which Eq. 12.8-6 applies.
 S1_NEAR_FAULT_G = 0.6
+
+#: Branches of §11.4.8 exception 2 (Site D, S1 >= 0.2 g).
+EXC2_SHORT = "T <= 1.5 Ts: Eq. 12.8-2"
+EXC2_MID = "1.5 Ts < T <= TL: 1.5 x Eq. 12.8-3"
+EXC2_LONG = "T > TL: 1.5 x Eq. 12.8-4"
+EXC2_PREFIX = "exc. 2: "
+
+#: §12.8.1.3 (from memory): Ss need not exceed 1.5 in computing Cs for regular structures of
+#: five stories or fewer with T <= 0.5 s, where its conditions hold.
+SS_CAP_12_8_1_3_G = 1.5
+SS_CAP_MAX_STORIES = 5
+SS_CAP_MAX_T_S = 0.5
 
 
 def Cu(SD1_g: float) -> float:
@@ -89,6 +101,19 @@ def Cs_min_near_fault(S1_g: float, R: float, Ie: float) -> float:
     return 0.0
 
 
+def Cs_exception_2(
+    SDS_g: float, SD1_g: float, T_s: float, TL_s: float, R: float, Ie: float, Ts_s: float
+) -> tuple[float, str]:
+    """Cs under ASCE 7-16 §11.4.8 exception 2 (Site D, S1 >= 0.2 g), before the lower bounds:
+    Eq. 12.8-2 for T <= 1.5 Ts; 1.5 x Eq. 12.8-3 for TL >= T > 1.5 Ts; 1.5 x Eq. 12.8-4 for
+    T > TL. Returns (Cs, branch). SDS_g is the SDS used for Cs; Ts_s = SD1/SDS (s)."""
+    if T_s <= 1.5 * Ts_s:
+        return Cs_basic(SDS_g, R, Ie), EXC2_SHORT
+    if T_s <= TL_s:
+        return 1.5 * SD1_g / (T_s * (R / Ie)), EXC2_MID
+    return 1.5 * SD1_g * TL_s / (T_s**2 * (R / Ie)), EXC2_LONG
+
+
 def Cs(
     SDS_g: float,
     SD1_g: float,
@@ -97,25 +122,37 @@ def Cs(
     TL_s: float,
     R: float,
     Ie: float,
+    exception_2_Ts_s: float | None = None,
 ) -> tuple[float, str]:
     """Seismic response coefficient and its governing equation, ASCE 7-16 §12.8.1.1 (g).
 
-    c = min(Eq. 12.8-2, Eq. 12.8-3 or 12.8-4); floor = max(Eq. 12.8-5, Eq. 12.8-6);
+    c = min(Eq. 12.8-2, Eq. 12.8-3 or 12.8-4), or the §11.4.8 exception 2 value where
+    `exception_2_Ts_s` (Ts, s) is given; floor = max(Eq. 12.8-5, Eq. 12.8-6);
     Cs = max(c, floor). The label names the equation whose value equals Cs; on a tie the
-    precedence is 12.8-2, then 12.8-3/12.8-4, then 12.8-5, then 12.8-6.
+    precedence is c, then 12.8-5, then 12.8-6 (within c: 12.8-2, then 12.8-3/12.8-4).
     """
     basic = Cs_basic(SDS_g, R, Ie)
     upper = Cs_upper(SD1_g, T_s, TL_s, R, Ie)
     minimum = Cs_min(SDS_g, Ie)
     near_fault = Cs_min_near_fault(S1_g, R, Ie)
-    value = max(min(basic, upper), max(minimum, near_fault))
-    if value == basic:
-        return value, LABEL_CS_BASIC
-    if value == upper:
-        return value, Cs_upper_label(T_s, TL_s)
+    if exception_2_Ts_s is not None:
+        ranged, branch = Cs_exception_2(SDS_g, SD1_g, T_s, TL_s, R, Ie, exception_2_Ts_s)
+        label = EXC2_PREFIX + branch
+    else:
+        ranged = min(basic, upper)
+        label = LABEL_CS_BASIC if ranged == basic else Cs_upper_label(T_s, TL_s)
+    value = max(ranged, max(minimum, near_fault))
+    if value == ranged:
+        return value, label
     if value == minimum:
         return value, LABEL_CS_MIN
     return value, LABEL_CS_MIN_NEAR_FAULT
+
+
+def Ss_for_Cs(Ss_g: float, cap_permitted: bool) -> float:
+    """Ss used in computing Cs: not more than 1.5 g where §12.8.1.3 is taken and its
+    conditions hold, ASCE 7-16 §12.8.1.3 (from memory) (g)."""
+    return min(Ss_g, SS_CAP_12_8_1_3_G) if cap_permitted else Ss_g
 
 
 def base_shear(Cs: float, W_kip: float) -> float:
