@@ -11,6 +11,7 @@ from typing import Any
 from latbook.analysis.combinations import combination_results
 from latbook.analysis.diaphragm import diaphragm_results
 from latbook.analysis.inputs import input_results
+from latbook.analysis.schedules import schedule_results
 from latbook.analysis.seismic import seismic_results
 from latbook.analysis.shear_walls import shear_wall_results
 from latbook.analysis.story_drift import drift_results
@@ -31,6 +32,7 @@ STEPS = [
     shear_wall_results,
     drift_results,
     summary_results,
+    schedule_results,
 ]
 
 

@@ -126,6 +126,15 @@ def combination_results(spec: Spec, out: dict[str, Any]) -> None:
         q["seismic_resisting"] = f.seismic_resisting_name
         q["overstrength_additive"] = f.overstrength_additive_name
         q["overstrength_resisting"] = f.overstrength_resisting_name
+        for m in ("ASD", "LRFD"):  # both methods' names, each on its own row
+            fm = combinations.lateral_factors(m, SDS_g, rho, Omega0)
+            fm_dia = combinations.lateral_factors(m, SDS_g, RHO_DIAPHRAGM, Omega0)
+            tag = m.lower()
+            q[f"seismic_additive_{tag}"] = fm.seismic_additive_name
+            q[f"seismic_additive_dia_{tag}"] = fm_dia.seismic_additive_name
+            q[f"seismic_resisting_{tag}"] = fm.seismic_resisting_name
+            q[f"overstrength_additive_{tag}"] = fm.overstrength_additive_name
+            q[f"overstrength_resisting_{tag}"] = fm.overstrength_resisting_name
         q["Fac_E"] = f.seismic_lateral
         q["Fac_E_dia"] = f_dia.seismic_lateral
         q["Fac_D_E_add"] = f.seismic_dead_additive

@@ -113,9 +113,9 @@ def _ratio(demand: float, capacity_value: float | None) -> float | str:
 WIND_CASE_NAMES = {
     "w1": "Case 1",
     "wmin": "minimum (§27.1.5)",
+    "w3": "Case 3",
     "w2p": "Case 2 (+e)",
     "w2n": "Case 2 (-e)",
-    "w3": "Case 3",
     "w4p": "Case 4 (+e)",
     "w4n": "Case 4 (-e)",
 }
@@ -263,15 +263,21 @@ def _case_results(
             r["v_line_fpx_plf"] = diaphragm_tributary.diaphragm_unit_shear_plf(r["R_seis_fpx"], b)
         if wind:
             cases = {"w1": w["wind"] * trib, "wmin": w["wmin"] * trib}
-            if torsion:
-                cases["w2p"], cases["w2n"] = tor["p"][1][i], tor["n"][1][i]
             cases["w3"] = wind_cases.CASE_2_3_FRACTION * cases["w1"]
             if torsion:
                 ratio = wind_cases.CASE_4_FRACTION / wind_cases.CASE_2_3_FRACTION
+                cases["w2p"], cases["w2n"] = tor["p"][1][i], tor["n"][1][i]
                 cases["w4p"], cases["w4n"] = ratio * cases["w2p"], ratio * cases["w2n"]
             for key, value in cases.items():
                 r[f"R_{key}"] = value
             r["R_wind"], r["wind_case"] = governing_name(cases, WIND_CASE_NAMES)
+            if torsion:  # the sheet names the case in two steps (formulas stay short)
+                direct = ("w1", "wmin", "w3")
+                r["case_a"] = (
+                    r["wind_case"]
+                    if any(WIND_CASE_NAMES[k] == r["wind_case"] for k in direct)
+                    else "-"
+                )
             r["v_line_wind_plf"] = diaphragm_tributary.diaphragm_unit_shear_plf(r["R_wind"], b)
         r["L_walls_ft"] = sum(seg.length_ft for seg in ln.story.segments)
         factors = _segment_factors(spec, level, ln)

@@ -48,11 +48,15 @@ def site_results(gm: SiteClassMotion, q: dict[str, Any]) -> None:
     q["Fa_row"] = row
     q["Fa_Ss"] = min(max(Ss, site.TABLE_11_4_1_SS_G[0]), site.TABLE_11_4_1_SS_G[n_tab - 1])
     q["Fa_col"] = min(_match(q["Fa_Ss"], site.TABLE_11_4_1_SS_G), n_tab - 1)
+    q["Fa_lo"] = site.TABLE_11_4_1_FA[row][q["Fa_col"] - 1]
+    q["Fa_hi"] = site.TABLE_11_4_1_FA[row][q["Fa_col"]]
     q["Fa_tab"] = site.Fa_table(row, Ss)
     q["Fa"] = site.Fa(sc, Ss, basis)
     cols = site.TABLE_11_4_2_S1_G
     q["Fv_S1"] = min(max(S1, cols[0]), cols[-1])
     q["Fv_col"] = min(_match(q["Fv_S1"], cols), len(cols) - 1)
+    q["Fv_lo"] = site.TABLE_11_4_2_FV[sc][q["Fv_col"] - 1]
+    q["Fv_hi"] = site.TABLE_11_4_2_FV[sc][q["Fv_col"]]
     q["Fv_tab"] = site.Fv_table(sc, S1)
     q["Fv"] = site.Fv(sc, S1, basis)
     q["Fv_note"] = FV_NOTE if site.fv_footnote_a(sc, S1) else "-"
@@ -97,6 +101,11 @@ def seismic_results(spec: Spec, out: dict[str, Any]) -> None:
     q["Ct"], q["x"], _ = elf.STRUCTURE_TYPES[s.structure_type]
     q["hn"] = heights[0]
     q["Ta"] = elf.Ta(q["Ct"], q["hn"], q["x"])
+    cu_rows = elf.TABLE_12_8_1_SD1_G
+    q["Cu_SD1"] = min(max(q["SD1"], cu_rows[0]), cu_rows[-1])
+    q["Cu_col"] = min(_match(q["Cu_SD1"], cu_rows), len(cu_rows) - 1)
+    q["Cu_lo"] = elf.TABLE_12_8_1_CU[q["Cu_col"] - 1]
+    q["Cu_hi"] = elf.TABLE_12_8_1_CU[q["Cu_col"]]
     q["Cu"] = elf.Cu(q["SD1"])
     q["T"] = T = elf.period_used(q["Ta"], q["Cu"], s.T_computed_s)
     q["Ts"] = site.Ts(q["SDS"], q["SD1"])

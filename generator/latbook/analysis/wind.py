@@ -83,6 +83,9 @@ def direction_results(spec: Spec, direction: str, out: dict[str, Any]) -> None:
     Kz_h = wind.Kz(h_ft, w.exposure)
     L_over_B = max(L_ft) / max(B_ft)
     Cp_lw = wind.Cp_leeward(L_over_B)
+    lb_rows = wind.LEEWARD_L_OVER_B
+    LB_used = min(max(L_over_B, lb_rows[0]), lb_rows[-1])
+    lb_col = min(sum(1 for r in lb_rows if r <= LB_used), len(lb_rows) - 1)
     qh_psf = wind.qz(Kz_h, w.Kzt, w.Kd, Ke, w.V_mph)
     q: dict[str, Any] = {
         "V_mph": w.V_mph,
@@ -100,6 +103,10 @@ def direction_results(spec: Spec, direction: str, out: dict[str, Any]) -> None:
         "B_ft": max(B_ft),
         "L_over_B": L_over_B,
         "Cp_windward": wind.CP_WINDWARD,
+        "Cp_lw_LB": LB_used,
+        "Cp_lw_col": lb_col,
+        "Cp_lw_lo": wind.LEEWARD_CP[lb_col - 1],
+        "Cp_lw_hi": wind.LEEWARD_CP[lb_col],
         "Cp_leeward": Cp_lw,
         "p_leeward_psf": wind.wall_pressure(qh_psf, w.G, Cp_lw),
     }

@@ -12,6 +12,7 @@ from typing import Any
 from latbook.analysis.combinations import combination_uses
 from latbook.analysis.wind import torsional_cases_apply
 from latbook.spec.models import Spec
+from latbook.spec.schedule_rows import schedule_collections
 from latbook.workbook.diaphragm_context import diaphragm_collections, wall_input_collections
 from latbook.workbook.regularity_context import regularity_collections
 from latbook.workbook.wall_collections import wall_collections
@@ -120,4 +121,5 @@ COLLECTION_BUILDERS = [
     wall_collections,
     weight_collections,
     regularity_collections,
+    schedule_collections,
 ]
