@@ -1,5 +1,6 @@
-"""Rows of the Schedules sheet (layout only, shared by the analysis and the workbook): shear-wall assemblies with the
-segments that use them, every segment's hold-down, and every collector line."""
+"""Rows of the Schedules sheet (layout only, shared by the analysis and the workbook):
+shear-wall assemblies with the segments that use them, every segment's hold-down, and every
+collector line."""
 
 from __future__ import annotations
 
