@@ -2,7 +2,9 @@
 
 Compares, per calculated cell, the formula text with what the generator writes for the
 workbook's current inputs, and the value the file stores with a fresh engine run on those
-inputs; checks every input against its allowed range or list. No formula evaluator runs
+inputs; checks every input against its allowed range or list; lists the inputs that differ
+from the embedded spec (an edit, not a finding: the Cover's live check shows their count,
+which is compared like any result). No formula evaluator runs
 here: the stored values are those of the program that last saved the file (Excel and
 LibreOffice recalculate on save); `recalc=True` recalculates a copy in LibreOffice first.
 """
@@ -18,10 +20,12 @@ from typing import Any
 
 from latbook import __version__
 from latbook.analysis import compute_results
+from latbook.analysis.build_check import INPUTS_EDITED_ID, STATUS_ID, status_text
 from latbook.problems import SpecError
 from latbook.readback import InputReading, ReadBack, built_spec, locate, read_inputs
 from latbook.spec.load import parse_spec
 from latbook.workbook.builder import layout
+from latbook.workbook.input_check import counts_as_edited
 from latbook.workbook.rendered import expected_formulas
 from latbook.workbook_file import WorkbookCells, read_workbook
 
@@ -63,6 +67,21 @@ class Finding:
         return f"{where}{name}{self.message}"
 
 
+@dataclass(frozen=True)
+class InputChange:
+    """An input cell whose value differs from the spec the workbook was built from."""
+
+    address: str  # Sheet!C5
+    spec_path: str  # $.building.levels[0].seismic_weight_kip
+    quantity: str
+    label: str
+    built: Any
+    current: Any
+
+    def __str__(self) -> str:
+        return f"{self.address}  {self.spec_path}: {self.built!r} -> {self.current!r}"
+
+
 @dataclass
 class VerifyReport:
     path: Path
@@ -73,6 +92,7 @@ class VerifyReport:
     findings: list[Finding] = field(default_factory=list)
     notes: list[str] = field(default_factory=list)
     cells_checked: int = 0
+    inputs_changed: list[InputChange] = field(default_factory=list)
 
     @property
     def intact(self) -> bool:
@@ -88,6 +108,8 @@ class VerifyReport:
             "stored_values": self.stored_values,
             "cells_checked": self.cells_checked,
             "findings": [asdict(f) for f in self.findings],
+            "inputs_as_built": not self.inputs_changed,
+            "inputs_changed": [asdict(c) for c in self.inputs_changed],
             "notes": self.notes,
         }
 
@@ -99,6 +121,11 @@ class VerifyReport:
             + ("; recalculated in LibreOffice" if self.recalculated else ""),
         ]
         lines += [f"  note: {n}" for n in self.notes]
+        if self.inputs_changed:
+            lines.append(f"  inputs changed since the build ({len(self.inputs_changed)}):")
+            lines += [f"    {c}" for c in self.inputs_changed]
+        else:
+            lines.append("  inputs as built: every input cell holds the embedded spec's value")
         if self.intact:
             lines.append("  intact: every formula is the generator's and every result matches")
             return "\n".join(lines)
@@ -127,10 +154,15 @@ def verify_workbook(path: Path, *, recalc: bool = False) -> VerifyReport:
         report.findings.append(moved)
         return report
     back = read_inputs(cells)
+    report.inputs_changed = [_change(r) for r in back.readings if r.changed]
     report.findings += _input_findings(back)
     current = _current_spec(back, report)
     spec = current or built
     results = _engine(current, report) if current is not None else None
+    if results is not None:  # the Cover counts the edits the way the spreadsheet compares
+        edited = sum(counts_as_edited(r.built_value, r.cell_value) for r in back.readings)
+        results[INPUTS_EDITED_ID] = edited
+        results[STATUS_ID] = status_text(edited)
     values = _recalculated(cells) if recalc else cells
     _check_calcs(cells, values, spec, results, report)
     return report
@@ -157,6 +189,12 @@ def _layout_findings(cells: WorkbookCells, built) -> Finding | None:
         "inserted, deleted or relabelled, or the templates changed since the build: "
         "inputs cannot be read reliably, rebuild from the spec",
     )
+
+
+def _change(reading: InputReading) -> InputChange:
+    e = reading.entry
+    path = f"$.{e.spec_path}"
+    return InputChange(e.address, path, e.id, e.label, reading.built_value, reading.cell_value)
 
 
 def _input_findings(back: ReadBack) -> list[Finding]:
@@ -211,7 +249,8 @@ def _recalculated(cells: WorkbookCells) -> WorkbookCells:
 
 
 def _check_calcs(cells, values, spec, results, report: VerifyReport) -> None:
-    formulas, registry = expected_formulas(spec)
+    formulas, helpers, registry = expected_formulas(spec)
+    _check_helpers(cells, helpers, report)
     calcs = registry.calcs()
     report.cells_checked = len(calcs)
     keys = {(e.sheet, e.row, e.col): e for e in calcs}
@@ -245,6 +284,23 @@ def _check_calcs(cells, values, spec, results, report: VerifyReport) -> None:
         if key not in keys and value in ERROR_VALUES and cells.is_formula(key):
             address = f"{key[0]}!{_a1(key[1], key[2])}"
             report.findings.append(Finding("error_value", f"evaluates to {value}", address))
+
+
+def _check_helpers(cells, helpers, report: VerifyReport) -> None:
+    """The formula text of the input check's helper cells on SpecData (their error values
+    are found with every other cell's; their sum on the Cover is compared as a result)."""
+    for key, expected in helpers.items():
+        address = f"{key[0]}!{_a1(key[1], key[2])}"
+        text = cells.formulas.get(key)
+        if not cells.is_formula(key):
+            what = "is empty" if text is None else f"holds the constant {text!r}"
+            report.findings.append(
+                Finding("formula_replaced", f"{what} instead of {expected}", address)
+            )
+        elif normalized(text) != normalized(expected):
+            report.findings.append(
+                Finding("formula_altered", f"holds {text} instead of {expected}", address)
+            )
 
 
 def normalized(formula: str) -> str:

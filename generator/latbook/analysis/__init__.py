@@ -8,6 +8,7 @@ from __future__ import annotations
 
 from typing import Any
 
+from latbook.analysis.build_check import build_check_results
 from latbook.analysis.combinations import combination_results
 from latbook.analysis.diaphragm import diaphragm_results
 from latbook.analysis.inputs import input_results
@@ -33,6 +34,7 @@ STEPS = [
     drift_results,
     summary_results,
     schedule_results,
+    build_check_results,
 ]
 
 

@@ -27,6 +27,7 @@ from latbook.workbook.cautions import CAUTION_SHORT
 from latbook.workbook.context import build_context
 from latbook.workbook.cover import COVER_SHEET, write_cover
 from latbook.workbook.index_sheet import INDEX_SHEET, write_index
+from latbook.workbook.input_check import HELPER_CACHED, CellGroup, plan_input_check
 from latbook.workbook.layout import COL_CLAUSE, Cell, SheetPlan, plan_sheets
 from latbook.workbook.registry import Registry, a1
 from latbook.workbook.rendered import cell_formula
@@ -51,11 +52,12 @@ class BuildError(RuntimeError):
     """The generator and the engine disagree about what exists: a developer error."""
 
 
-def layout(spec: Spec) -> tuple[list[SheetPlan], Registry]:
-    """Every sheet's plan and the registry, without writing anything."""
+def layout(spec: Spec) -> tuple[list[SheetPlan | CellGroup], Registry]:
+    """Every sheet's plan, then the cells placed on the Cover and SpecData (the live input
+    check), and the registry, without writing anything."""
     registry = Registry()
     plans = plan_sheets(all_templates(), build_context(spec), registry)
-    return plans, registry
+    return [*plans, *plan_input_check(plans, registry)], registry
 
 
 def write_workbook(
@@ -96,7 +98,9 @@ def _write_workbook(spec, results, path, spec_json, spec_sha256, protect) -> Reg
     return registry
 
 
-def _write(spec, results, plans, registry, tmp, spec_json, spec_sha256, protect) -> None:
+def _write(spec, results, placed, registry, tmp, spec_json, spec_sha256, protect) -> None:
+    plans = [p for p in placed if isinstance(p, SheetPlan)]
+    groups = {g.name: g for g in placed if isinstance(g, CellGroup)}
     wb = xlsxwriter.Workbook(str(tmp), WORKBOOK_OPTIONS)
     wb.set_properties(
         {
@@ -115,6 +119,7 @@ def _write(spec, results, plans, registry, tmp, spec_json, spec_sha256, protect)
 
     cover = wb.add_worksheet(COVER_SHEET)
     last = write_cover(cover, spec, spec_sha256, styles, results)
+    _write_group(cover, groups[COVER_SHEET], registry, results, styles)
     _finish_sheet(cover, header, last, 1, protect, landscape=False)
 
     sheets = {plan.name: wb.add_worksheet(plan.name) for plan in plans}
@@ -143,6 +148,7 @@ def _write(spec, results, plans, registry, tmp, spec_json, spec_sha256, protect)
 
     data = wb.add_worksheet(SPEC_SHEET)
     _write_spec_data(data, spec_json, spec_sha256, styles)
+    _write_group(data, groups[SPEC_SHEET], registry, results, styles)
     data.hide()
     data.protect()
     try:
@@ -182,6 +188,21 @@ def _write_plan(ws: Worksheet, plan: SheetPlan, registry: Registry, results, sty
     tables = registry.tables
     for cell in plan.cells:
         _write_cell(ws, plan.name, cell, registry, tables, results, styles)
+
+
+def _write_group(ws: Worksheet, group: CellGroup, registry: Registry, results, styles) -> None:
+    """The cells placed on a sheet with a writer of its own: formulas (an unregistered
+    helper caches HELPER_CACHED), labels, and values as built."""
+    for cell in group.cells:
+        fmt = styles.get(cell.style, cell.fmt)
+        if cell.formula is not None:
+            value = _cached(results[cell.qid]) if cell.qid else HELPER_CACHED
+            formula = cell_formula(cell, group.name, registry)
+            ws.write_formula(cell.row, cell.col, formula, fmt, value)
+        elif cell.text is not None:
+            ws.write_string(cell.row, cell.col, cell.text, fmt)
+        else:
+            _write_value(ws, cell.row, cell.col, cell.value, fmt)
 
 
 def _write_charts(wb, ws: Worksheet, plan: SheetPlan, registry: Registry) -> None:
@@ -234,17 +255,21 @@ def _cached(value: Any) -> Any:
 
 
 def _write_input(ws: Worksheet, cell: Cell, fmt) -> None:
-    value = cell.value
-    if isinstance(value, bool):
-        ws.write_boolean(cell.row, cell.col, value, fmt)
-    elif isinstance(value, int | float):
-        ws.write_number(cell.row, cell.col, value, fmt)
-    else:
-        ws.write_string(cell.row, cell.col, "" if value is None else str(value), fmt)
+    _write_value(ws, cell.row, cell.col, cell.value, fmt)
     if cell.limits is not None:
         rule = data_validation(cell.limits, a1(cell.row, cell.col))
         if rule is not None:
             ws.data_validation(cell.row, cell.col, cell.row, cell.col, rule)
+
+
+def _write_value(ws: Worksheet, row: int, col: int, value: Any, fmt) -> None:
+    """A spec value as its own cell type (text as text, never a formula)."""
+    if isinstance(value, bool):
+        ws.write_boolean(row, col, value, fmt)
+    elif isinstance(value, int | float):
+        ws.write_number(row, col, value, fmt)
+    else:
+        ws.write_string(row, col, "" if value is None else str(value), fmt)
 
 
 def data_validation(limits: FieldLimits, address: str) -> dict[str, Any] | None:

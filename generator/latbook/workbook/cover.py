@@ -14,6 +14,9 @@ from latbook.workbook.cautions import CAUTION_LINES
 from latbook.workbook.styles import Styles
 
 COVER_SHEET = "Cover"
+COVER_STATUS_ROW = 17  # the live input check (input_check.py), below the 15 rows of fields
+COVER_CHECK_ROWS = 2  # its status text and its count
+STATUS_HEIGHT_PT = 26.0  # two lines: the text when the inputs were edited
 
 
 def write_cover(
@@ -52,6 +55,10 @@ def write_cover(
         ws.write_string(row, 0, label, styles.get("cover_label"))
         ws.write_string(row, 1, value, styles.get("cover_value"))
         row += 1
+    if row != COVER_STATUS_ROW:
+        raise ValueError(f"the Cover's fields end at row {row}, not {COVER_STATUS_ROW}")
+    ws.set_row(row, STATUS_HEIGHT_PT)
+    row += COVER_CHECK_ROWS  # written by the builder with the other formula cells
     if results is not None and spec.wall_lines:
         row += 1
         ws.write_string(row, 0, "Design choices", styles.get("cover_label"))

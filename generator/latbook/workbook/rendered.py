@@ -6,10 +6,15 @@ with them, so both go through `cell_formula`.
 
 from __future__ import annotations
 
+from collections.abc import Sequence
+
 from latbook.spec.models import Spec
 from latbook.workbook.formula import render
+from latbook.workbook.input_check import CellGroup
 from latbook.workbook.layout import Cell, SheetPlan
 from latbook.workbook.registry import Registry
+
+Placed = Sequence[SheetPlan | CellGroup]
 
 
 def cell_formula(cell: Cell, sheet: str, registry: Registry) -> str:
@@ -26,7 +31,7 @@ def cell_formula(cell: Cell, sheet: str, registry: Registry) -> str:
     )
 
 
-def formulas_by_quantity(plans: list[SheetPlan], registry: Registry) -> dict[str, str]:
+def formulas_by_quantity(plans: Placed, registry: Registry) -> dict[str, str]:
     """Quantity id -> the formula the generator writes in its cell."""
     return {
         cell.qid: cell_formula(cell, plan.name, registry)
@@ -36,9 +41,22 @@ def formulas_by_quantity(plans: list[SheetPlan], registry: Registry) -> dict[str
     }
 
 
-def expected_formulas(spec: Spec) -> tuple[dict[str, str], Registry]:
-    """(quantity id -> formula, registry) for the workbook `spec` builds."""
+def helper_formulas(plans: Placed, registry: Registry) -> dict[tuple[str, int, int], str]:
+    """(sheet, row, col) -> formula of each unregistered helper cell (the input check)."""
+    return {
+        (plan.name, cell.row, cell.col): cell_formula(cell, plan.name, registry)
+        for plan in plans
+        for cell in plan.cells
+        if cell.formula is not None and cell.qid is None
+    }
+
+
+def expected_formulas(
+    spec: Spec,
+) -> tuple[dict[str, str], dict[tuple[str, int, int], str], Registry]:
+    """(quantity id -> formula, helper cell -> formula, registry) for the workbook `spec`
+    builds."""
     from latbook.workbook.builder import layout
 
     plans, registry = layout(spec)
-    return formulas_by_quantity(plans, registry), registry
+    return formulas_by_quantity(plans, registry), helper_formulas(plans, registry), registry
