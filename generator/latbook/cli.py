@@ -1,8 +1,9 @@
 """Command line: parse options, call the library, print problems, set the exit code.
 
-Exit codes (latbook.exit_codes): 0 done; 1 a check failed (verify); 2 bad input or usage,
-nothing written; 3 the environment failed (output not writable, disk full, LibreOffice
-missing), nothing written; 130 interrupted (Ctrl-C); 143 terminated (SIGTERM).
+Exit codes (latbook.exit_codes): 0 done; 1 a check failed (verify) or changes found
+(diff); 2 bad input or usage, nothing written; 3 the environment failed (output not
+writable, disk full, LibreOffice missing, stdout closed), nothing written; 130 interrupted
+(Ctrl-C); 143 terminated (SIGTERM).
 """
 
 from __future__ import annotations
@@ -10,12 +11,14 @@ from __future__ import annotations
 import argparse
 import contextlib
 import json
+import os
 import signal
 import sys
 from collections.abc import Iterator, Sequence
 from pathlib import Path
 
 from latbook import __version__
+from latbook.cli_diff import DIFF_COMMANDS, add_diff_command
 from latbook.cli_workbook import WORKBOOK_COMMANDS, add_workbook_commands, output_error
 from latbook.exit_codes import (
     EXIT_BAD_INPUT,
@@ -43,8 +46,9 @@ def _parser() -> argparse.ArgumentParser:
         prog="latbook",
         description="Lateral-force calc workbooks with live formulas from a JSON spec. "
         + CAUTION_SHORT,
-        epilog="Exit codes: 0 done, 1 a check failed, 2 bad input (nothing written), "
-        "3 environment failure (nothing written), 130 interrupted, 143 terminated.",
+        epilog="Exit codes: 0 done, 1 a check failed or changes found, 2 bad input "
+        "(nothing written), 3 environment failure (nothing written), 130 interrupted, "
+        "143 terminated.",
     )
     p.add_argument("--version", action="version", version=f"latbook {__version__}")
     sub = p.add_subparsers(dest="command", required=True)
@@ -63,6 +67,7 @@ def _parser() -> argparse.ArgumentParser:
     r.add_argument("spec", type=Path)
     r.add_argument("--json", action="store_true", help="JSON output (default: id = value)")
     add_workbook_commands(sub)
+    add_diff_command(sub)
     return p
 
 
@@ -77,6 +82,9 @@ def main(argv: Sequence[str] | None = None) -> int:
                 return EXIT_BAD_INPUT
             except MemoryError:
                 print("latbook: out of memory; nothing was written", file=sys.stderr)
+                return EXIT_ENVIRONMENT
+            except BrokenPipeError:  # the reader of stdout went away (`| head`)
+                os.dup2(os.open(os.devnull, os.O_WRONLY), sys.stdout.fileno())
                 return EXIT_ENVIRONMENT
     except KeyboardInterrupt:
         print("latbook: interrupted; nothing was written", file=sys.stderr)
@@ -178,6 +186,7 @@ COMMANDS = {
     "schema": _cmd_schema,
     "results": _cmd_results,
     **WORKBOOK_COMMANDS,
+    **DIFF_COMMANDS,
 }
 
 if __name__ == "__main__":

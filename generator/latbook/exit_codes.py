@@ -1,9 +1,10 @@
 """Exit codes of every latbook command (the README's Commands section lists the same)."""
 
 EXIT_OK = 0
-"""Done: the file was written, the spec is valid, the workbook is intact."""
+"""Done: the file was written, the spec is valid, the workbook is intact, `diff` found
+nothing changed."""
 EXIT_FAILED = 1
-"""A check failed: `verify` found the workbook edited or inconsistent."""
+"""A check failed: `verify` found the workbook edited or inconsistent; `diff` found changes."""
 EXIT_BAD_INPUT = 2
 """Bad input or usage: the spec or workbook is refused; nothing was written."""
 EXIT_ENVIRONMENT = 3
