@@ -221,3 +221,25 @@ def test_flatten_and_moved():
     assert not moved(0.0, 5e-10, 1e-6, 1e-9)  # under the absolute floor
     assert moved("ok", "FAILS", 1e-6, 1e-9)
     assert moved("no capacity", 0.5, 1e-6, 1e-9)
+
+
+def test_output_to_a_reader_that_stops_early(specs):
+    """`latbook diff ... | head -1`: the pipe closes under a long report; exit 3, no
+    traceback."""
+    import os
+    import subprocess
+    import sys
+
+    old_path, new_path, _, _ = specs
+    env = {**os.environ, "PYTHONPATH": str(ROOT / "generator")}
+    proc = subprocess.Popen(
+        [sys.executable, "-m", "latbook", "diff", str(old_path), str(new_path), "--json"],
+        stdout=subprocess.PIPE,
+        stderr=subprocess.PIPE,
+        env=env,
+    )
+    assert proc.stdout.readline() == b"{\n"  # the report runs far past a pipe's buffer
+    proc.stdout.close()
+    err = proc.stderr.read().decode()
+    assert proc.wait() == 3
+    assert "Traceback" not in err
