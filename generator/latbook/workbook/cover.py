@@ -14,7 +14,7 @@ from latbook.workbook.cautions import CAUTION_LINES
 from latbook.workbook.styles import Styles
 
 COVER_SHEET = "Cover"
-COVER_STATUS_ROW = 17  # the live input check (input_check.py), below the 15 rows of fields
+COVER_STATUS_ROW = 18  # the live input check (input_check.py), below the 16 rows of fields
 COVER_CHECK_ROWS = 2  # its status text and its count
 STATUS_HEIGHT_PT = 26.0  # two lines: the text when the inputs were edited
 
