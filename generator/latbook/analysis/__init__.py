@@ -11,6 +11,7 @@ from typing import Any
 from latbook.analysis.build_check import build_check_results
 from latbook.analysis.combinations import combination_results
 from latbook.analysis.diaphragm import diaphragm_results
+from latbook.analysis.foundation import foundation_results
 from latbook.analysis.inputs import input_results
 from latbook.analysis.schedules import schedule_results
 from latbook.analysis.seismic import seismic_results
@@ -31,6 +32,7 @@ STEPS = [
     combination_results,
     diaphragm_results,
     shear_wall_results,
+    foundation_results,
     drift_results,
     summary_results,
     schedule_results,

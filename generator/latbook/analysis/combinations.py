@@ -36,7 +36,7 @@ COMBINATION_USES: tuple[tuple[str, str, str, str, str, str, str], ...] = (
     ),
     (
         "W_comp",
-        "End-post compression, wind (dead load adding; L, S not carried)",
+        "End-post compression, wind (D adding; with post L, Lr, S also comb. 6a / 4)",
         "wind_additive",
         "Fac_W",
         "Fac_D_W_add",
@@ -111,6 +111,15 @@ def combination_results(spec: Spec, out: dict[str, Any]) -> None:
         q["Fac_W"] = f.wind_lateral
         q["Fac_D_W_add"] = f.wind_dead_additive
         q["Fac_D_W"] = f.wind_dead_resisting
+        g = combinations.gravity_lateral_combination(method, "wind")
+        q.update(
+            wind_gravity=g.name,
+            Fac_W_g=g.lateral,
+            Fac_D_W_g=g.D,
+            Fac_L_W_g=g.L,
+            Fac_Lr_W_g=g.Lr,
+            Fac_S_W_g=g.S,
+        )
     if spec.seismic is not None:
         SDS_g, rho = out["seismic.SDS"], out["seismic.rho"]
         Omega0 = collectors.omega0_used(
@@ -140,6 +149,15 @@ def combination_results(spec: Spec, out: dict[str, Any]) -> None:
         q["Fac_D_E_add"] = f.seismic_dead_additive
         q["Fac_D_E"] = f.seismic_dead_resisting
         q["Fac_Em"] = f.overstrength_lateral
+        g = combinations.gravity_lateral_combination(method, "seis", SDS_g, rho)
+        q.update(
+            seismic_gravity=g.name,
+            Fac_E_g=g.lateral,
+            Fac_D_E_g=g.D,
+            Fac_L_E_g=g.L,
+            Fac_Lr_E_g=g.Lr,
+            Fac_S_E_g=g.S,
+        )
     for key, value in q.items():
         out[f"combo.{key}"] = value
     for use in combination_uses(spec):

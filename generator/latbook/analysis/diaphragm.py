@@ -18,11 +18,10 @@ from __future__ import annotations
 from dataclasses import replace
 from typing import Any
 
-from latbook.analysis.shear_walls import qualifying_factor
 from latbook.analysis.wind import torsional_cases_apply
 from latbook.engine import collector, diaphragm_chain, diaphragm_tributary
 from latbook.engine.asce7_16 import collectors, wind_cases
-from latbook.engine.sdpws import capacity, shear_wall
+from latbook.engine.sdpws import capacity, shear_wall, sheathing
 from latbook.spec.models import DiaphragmAssembly, Level, Spec
 from latbook.spec.plan_geometry import (
     DIAGRAM_FRACTIONS,
@@ -35,6 +34,7 @@ from latbook.spec.plan_geometry import (
     resisting_lines,
     span_extent_ft,
 )
+from latbook.spec.wall_heights import level_below, segment_height_ft
 
 NOT_GIVEN = "not given"
 """Shown where a demand/capacity ratio needs a capacity the spec does not give."""
@@ -100,6 +100,8 @@ def _input_results(spec: Spec, out: dict[str, Any]) -> None:
                 out[f"{base}.start_ft"] = seg.start_ft
                 out[f"{base}.length_ft"] = seg.length_ft
     for a in spec.assemblies.diaphragms:
+        out[f"dassembly.{a.id}.sheathing"] = a.sheathing
+        out[f"dassembly.{a.id}.ar_limit"] = sheathing.diaphragm_aspect_limit(a.sheathing)
         out[f"dassembly.{a.id}.vs_nominal_plf"] = a.vs_nominal_plf
         out[f"dassembly.{a.id}.vw_nominal_plf"] = a.vw_nominal_plf
         out[f"dassembly.{a.id}.chord_capacity_lb"] = a.chord_capacity_lb
@@ -136,13 +138,15 @@ def governing_name(values: dict[str, float], names: dict[str, str]) -> tuple[flo
 
 
 def _segment_factors(spec: Spec, level: Level, ln: ResistingLine) -> list[float]:
-    """k of each segment (SDPWS-2015 §4.3.3.4.1), the share rule of the walls sheets."""
-    below = [lv for lv in spec.building.levels if lv.elevation_ft < level.elevation_ft]
-    base_ft = max((lv.elevation_ft for lv in below), default=0.0)
+    """k of each segment's face 1 (SDPWS-2015 §4.3.3.4.1 Exception; 0 past the Table 4.3.4
+    limit of its sheathing): the collectors share the line's force by L k."""
+    below = level_below(spec, level)
+    kinds = {a.id: a.sheathing for a in spec.assemblies.shear_walls}
     factors = []
     for seg in ln.story.segments:
-        h = seg.height_ft if seg.height_ft is not None else level.elevation_ft - base_ft
-        factors.append(qualifying_factor(shear_wall.aspect_ratio(h, seg.length_ft)))
+        h = segment_height_ft(level, below, seg)
+        ratio = shear_wall.aspect_ratio(h, seg.length_ft)
+        factors.append(sheathing.wall_aspect_factor(ratio, kinds[seg.assembly], "capacity"))
     return factors
 
 
@@ -204,6 +208,7 @@ def _case_results(
     for n, (lay, u) in enumerate(zip(layout_spans, unit_spans, strict=True)):
         r: dict[str, Any] = {"start_ft": u.span.start_ft, "end_ft": u.span.end_ft}
         r["L_ft"] = u.span.length_ft
+        r["LW"] = 0.0 if u.span.kind == "cantilever" else u.span.length_ft / b
         r["Ma_unit_ft2"], r["Mb_unit_ft2"] = u.Ma_lbft, u.Mb_lbft
         r["trib_start_ft"], r["trib_end_ft"] = u.R_a_lb, u.R_b_lb
         r["xs_unit_ft"], r["M_unit_ft2"] = u.x_star_ft, u.M_max_lbft
@@ -251,6 +256,8 @@ def _case_results(
         if u.span.kind == "cantilever":
             _cantilever_limits(spec, P, lay.number, u.span.length_ft, b, out)
 
+    out[f"{P}.ar_max"] = max(r["LW"] for r in span_rows)
+    out[f"{P}.ar_dcr"] = out[f"{P}.ar_max"] / sheathing.diaphragm_aspect_limit(assembly.sheathing)
     geo = _geometric_tributary_ft(positions, lo, hi)
     peaks_E: list[float] = []
     peaks_W: list[float] = []

@@ -7,33 +7,45 @@ from typing import Any
 
 from latbook.engine.asce7_16 import combinations
 from latbook.spec.models import Spec
-from latbook.spec.summary_items import SummaryItem, summary_items
+from latbook.spec.summary_items import SOURCE_TEXT, SummaryItem, summary_items
+from latbook.spec.wall_stories import wall_stories
 
 NO_CAPACITY = "no capacity in spec: choose one for the demand"
 NOT_GIVEN = "not given"
+HOLD_DOWN_NOT_CHECKED = "not checked: no hold-down capacity"
 FAILS, OK, MARKER = "FAILS", "ok", "<<<"
-INCOMPLETE = "INCOMPLETE: no DCR above 1.0, but some checks were not made (rows not marked ok)"
-DRIFT_BASIS = {
-    "seis": "strength-level E (QE), Cd δxe / Ie",
-    "wind": "strength-level W (conservative for serviceability)",
-}
+INCOMPLETE = "INCOMPLETE: no DCR above 1.0, but some checks were not made. "
+NOT_MADE = "Not made: "
+NOTHING = "-"
+FAILS_TEXT = "FAILS: see the rows marked <<<"
+DRIFT_SEISMIC_BASIS = "strength-level E (QE), Cd δxe / Ie"
+
+
+def drift_basis(source: str, spec: Spec) -> str:
+    """The load level of a drift row (ASCE 7-16 §12.8.6; App. C for wind)."""
+    if source == "seis":
+        return DRIFT_SEISMIC_BASIS
+    factor = combinations.number_text(spec.drift.wind_serviceability_factor)
+    return f"serviceability wind {factor} x W (force-driven part; ASCE 7-16 App. C)"
 
 
 CANTILEVER_OK = "limits ok; edge drift not checked"
 CANTILEVER_BASIS_TEXT = "geometry, SDPWS-2015 §4.2.5.2"
 
 
-def combination_text(item: SummaryItem, out: dict[str, Any]) -> str:
+def combination_text(item: SummaryItem, out: dict[str, Any], spec: Spec) -> str:
     """The load combination a row's check uses, named on the Combos sheet (ASCE 7-16 §2.3,
     §2.4, §12.4); unit shear with D adding, hold-downs with D resisting."""
     if item.kind == "cantilever":
         return CANTILEVER_BASIS_TEXT
+    if item.kind == "diaph_ar":
+        return "geometry, SDPWS-2015 Table 4.2.4"
     if item.kind == "diaph":
         return f"see Dia_{item.level}_{item.dir}"
     if item.kind in ("chord", "collector"):
         return out[f"diaph.{item.level}.{item.dir}.{item.kind}_source"]
     if item.kind == "drift":
-        return DRIFT_BASIS[item.source]
+        return drift_basis(item.source, spec)
     name = "seismic" if item.source == "seis" else "wind"
     role = "resisting" if item.kind == "hold_down" else "additive"
     return out[f"combo.{name}_{role}"]
@@ -43,6 +55,9 @@ def _element_and_values(item: SummaryItem, out: dict[str, Any]) -> tuple[str, An
     """(element text, demand, DCR) for one row."""
     if item.kind == "diaph":
         return f"level {item.level}, load in {item.dir}", "-", out[f"diaph.{item.key[6:]}.dcr_max"]
+    if item.kind == "diaph_ar":
+        base = f"diaph.{item.level}.{item.dir}"
+        return f"level {item.level} spans, load in {item.dir}", "-", out[f"{base}.ar_dcr"]
     if item.kind == "cantilever":
         prefix = f"diaph.{item.level}.{item.dir}.cant."
         dcr = max(v for k, v in out.items() if k.startswith(prefix) and k.endswith(".dcr"))
@@ -60,13 +75,16 @@ def _element_and_values(item: SummaryItem, out: dict[str, Any]) -> tuple[str, An
 
 
 def _hold_down_row(lv: str, src: str, out: dict[str, Any]) -> tuple[str, Any, Any]:
-    """The largest hold-down DCR of the story (AWC SDPWS-2015 §4.3.6.4.2), or "not given"
-    while a segment with uplift has no capacity and no given one fails."""
-    dcr_max = out[f"walls.{lv}.T_dcr_{src}_max"]
+    """The largest hold-down DCR of the story among segments with a capacity (AWC SDPWS-2015
+    §4.3.6.4.2); while some segment with uplift has none and no DCR exceeds 1, the element
+    names those segments."""
+    dcr = out[f"walls.{lv}.T_dcr_{src}_max"]
     missing = out[f"walls.{lv}.T_dcr_{src}_missing"]
-    dcr = NOT_GIVEN if missing > 0 and dcr_max <= 1 else dcr_max
-    gov = out[f"walls.{lv}.T_{src}_gov" if isinstance(dcr, str) else f"walls.{lv}.T_dcr_{src}_gov"]
-    return gov, out[f"walls.{lv}.T_{src}_max"], dcr
+    if missing > 0 and dcr <= 1:
+        element = out[f"walls.{lv}.T_dcr_{src}_missing_list"]
+    else:
+        element = out[f"walls.{lv}.T_dcr_{src}_gov"]
+    return element, out[f"walls.{lv}.T_{src}_max"], dcr
 
 
 ROOF_UPLIFT_BASIS = (
@@ -80,9 +98,27 @@ MINIMUM_WIND_BASIS = (
     "as its own case to every element"
 )
 CANTILEVER_BASIS = "Diaphragm overhangs: SDPWS-2015 §4.2.5.2 limits; deflections shown tolerable: "
+SHEATHING_BASIS = (
+    "Aspect ratios and factors by sheathing (SDPWS-2015 Table 4.3.4, §4.3.4, Table 4.2.4; values "
+    "from memory): a segment past the limit of its face 1 is not a shear wall (listed below); two "
+    "faces combined by §4.3.3.2 (wind: panels or fiberboard with gypsum opposite summed), Ga of "
+    "the faces added"
+)
+HOLD_DOWN_DRIFT_BASIS = (
+    "Δa (SDPWS-2015 Eq. 4.3-1): the rated elongation scaled to the hold-down force at strength "
+    "level (design T over the lateral factor) + shrinkage + crushing, or the assembly's Δa as "
+    "given where no rated elongation is given; story drift adds the rotation of the stacked "
+    "walls below (hold-down elongation and end-post strain), 0 where a wall does not stack"
+)
+END_POST_BASIS = (
+    "End-post compression: the larger of the combination with D and the one with the post's L "
+    "and Lr or S (ASCE 7-16 §2.4.1 comb. 6a, §2.4.5 comb. 9; LRFD §2.3.1 comb. 4, §2.3.6 comb. 6; "
+    "the 0.5L exception not taken); where no post load is given, the overturning part and the "
+    "dead point load only (Basis column)"
+)
 
 
-LIVE_CHOICES = ("torsion", "collector", "omega", "cantilever")
+LIVE_CHOICES = ("torsion", "collector", "omega", "distribution", "wind_drift", "cantilever")
 """Choices the Summary prints as live formulas of their input cells (the rest are fixed text)."""
 
 
@@ -108,6 +144,28 @@ def design_choices(spec: Spec, out: dict[str, Any]) -> dict[str, str]:
             "Ω0 applied (ASCE 7-16 Table 12.2-1, note g for flexible diaphragms): "
             + combinations.number_text(out["combo.Omega0_used"])
         )
+    if spec.shear_walls.line_distribution == "capacity":
+        how = "capacity L k v (the Exception)"
+    else:
+        how = (
+            "deflection (the same top displacement by Eq. 4.3-1; two fixed passes, Δa at the "
+            "hold-down force)"
+        )
+    texts["distribution"] = (
+        f"Shear in a wall line (SDPWS-2015 §4.3.3.4.1): by {how}; collectors share the line "
+        "force by L k"
+    )
+    texts["sheathing"] = SHEATHING_BASIS
+    texts["hold_down_drift"] = HOLD_DOWN_DRIFT_BASIS
+    if spec.wind is not None:
+        texts["wind_drift"] = (
+            "Wind drift at a serviceability wind: "
+            + combinations.number_text(spec.drift.wind_serviceability_factor)
+            + " x strength-level W on the force-driven deflection (ASCE 7-16 App. C, CC.2.2; "
+            "0.42 about the 10-year wind, common practice), limit h/"
+            + combinations.number_text(spec.drift.wind_ratio)
+        )
+    texts["end_posts"] = END_POST_BASIS
     tolerated = "yes" if spec.diaphragms.cantilever_deflection_tolerated else "no"
     texts["cantilever"] = (
         CANTILEVER_BASIS + tolerated + "; story drift at the overhang edge not checked"
@@ -156,6 +214,7 @@ def summary_results(spec: Spec, out: dict[str, Any]) -> None:
             out[f"summary.choice.{key}"] = text
     _basis_results(spec, out)
     dcrs: list[float] = []
+    open_text = NOT_MADE
     for item in items:
         element, demand, dcr = _element_and_values(item, out)
         if isinstance(dcr, str):
@@ -164,19 +223,38 @@ def summary_results(spec: Spec, out: dict[str, Any]) -> None:
             ok = CANTILEVER_OK if item.kind == "cantilever" else OK
             status = FAILS if dcr > 1 else ok
             dcrs.append(dcr)
+        source_text = SOURCE_TEXT.get(item.source, "seismic or wind, governing")
+        if item.kind == "hold_down":
+            missing = out[f"walls.{item.level}.T_dcr_{item.source}_missing"]
+            if status == OK and missing > 0:
+                status = HOLD_DOWN_NOT_CHECKED
+            lst = out[f"walls.{item.level}.T_dcr_{item.source}_missing_list"]
+            row_open = (
+                f"{item.family} ({source_text}): no capacity for {lst}; " if missing else NOTHING
+            )
+        elif status in (OK, FAILS):
+            row_open = NOTHING
+        else:
+            row_open = f"{item.family} ({source_text}), {element}: {status}; "
+        open_text += "" if row_open == NOTHING else row_open
         base = f"summary.{item.key}"
         out[f"{base}.element"] = element
-        out[f"{base}.combination"] = combination_text(item, out)
+        out[f"{base}.combination"] = combination_text(item, out, spec)
         out[f"{base}.demand"] = demand
         out[f"{base}.dcr"] = dcr
         out[f"{base}.status"] = status
         out[f"{base}.marker"] = MARKER if status == FAILS else "-"
+        out[f"{base}.open"] = row_open
+        out[f"{base}.open_cum"] = open_text
     out["summary.dcr_max"] = max(dcrs)
-    statuses = [out[f"summary.{item.key}.status"] for item in items]
     if max(dcrs) > 1:
-        overall = "FAILS: see the rows marked <<<"
-    elif any(status != OK for status in statuses):
-        overall = INCOMPLETE
+        overall = FAILS_TEXT + (f"; {open_text}" if open_text != NOT_MADE else "")
+    elif open_text != NOT_MADE:
+        overall = INCOMPLETE + open_text
     else:
         overall = "ok: every DCR is 1.0 or less"
     out["summary.overall"] = overall
+    for story in wall_stories(spec):
+        lv = story.level.id
+        out[f"summary.excluded.{lv}.count"] = out[f"walls.{lv}.excluded_count"]
+        out[f"summary.excluded.{lv}.list"] = out[f"walls.{lv}.excluded_list"]

@@ -165,6 +165,13 @@ class Level(_Strict):
         None, description="w_x from its parts (Weights sheet); give this or seismic_weight_kip."
     )
     plan: Plan
+    wall_height_ft: Annotated[float, Field(gt=0, le=400)] | None = Field(
+        None,
+        description="Sheathed height of the shear walls in the story below this level (story "
+        "height less the floor depth), ft: drives the aspect ratio and Eq. 4.3-1 (AWC "
+        "SDPWS-2015 §4.3.4, §4.3.2). Blank: the story height. A segment's height_ft overrides "
+        "it; the story height stays the drift height hsx.",
+    )
     diaphragm_assembly: Identifier | None = Field(
         None, description="Id of an entry in assemblies.diaphragms."
     )
@@ -315,11 +322,39 @@ class Wind(_Strict):
     )
 
 
+DIAPHRAGM_SHEATHING = (
+    "wsp_blocked",
+    "wsp_unblocked",
+    "lumber_single_straight",
+    "lumber_single_diagonal",
+    "lumber_double_diagonal",
+)
+"""Diaphragm sheathing types of AWC SDPWS-2015 Table 4.2.4 (latbook's own names)."""
+
+WALL_SHEATHING = (
+    "wsp_blocked",
+    "wsp_unblocked",
+    "particleboard_blocked",
+    "structural_fiberboard",
+    "gypsum_board_blocked",
+    "gypsum_board_unblocked",
+    "portland_cement_plaster_blocked",
+    "portland_cement_plaster_unblocked",
+    "lumber_diagonal",
+)
+"""Shear-wall sheathing types of AWC SDPWS-2015 Table 4.3.4 (latbook's own names)."""
+
+
 class DiaphragmAssembly(_Strict):
     """A diaphragm sheathing/nailing assembly and its nominal unit shear capacities."""
 
     id: Identifier
     description: Text = ""
+    sheathing: Literal[DIAPHRAGM_SHEATHING] = Field(  # type: ignore[valid-type]
+        "wsp_blocked",
+        description="Sheathing type: sets the maximum aspect ratio L/W of AWC SDPWS-2015 "
+        "Table 4.2.4.",
+    )
     vs_nominal_plf: Annotated[float, Field(gt=0, le=10000)]
     vw_nominal_plf: Annotated[float, Field(gt=0, le=15000)]
     chord_capacity_lb: Annotated[float, Field(gt=0, le=1.0e7)] | None = Field(
@@ -335,17 +370,53 @@ class DiaphragmAssembly(_Strict):
 
 
 class ShearWallAssembly(_Strict):
-    """A shear-wall assembly: nominal capacities, stiffness and end-post/hold-down data."""
+    """A shear-wall assembly: nominal capacities, stiffness and end-post/hold-down data.
+
+    The capacities and Ga are those of face 1; a wall sheathed on both faces gives face 2's
+    sheathing, capacities and Ga (AWC SDPWS-2015 §4.3.3.2 combines them)."""
 
     id: Identifier
     description: Text = ""
+    sheathing: Literal[WALL_SHEATHING] = Field(  # type: ignore[valid-type]
+        "wsp_blocked",
+        description="Sheathing type of face 1: sets the aspect-ratio limit and factor of AWC "
+        "SDPWS-2015 Table 4.3.4, §4.3.4.",
+    )
     vs_nominal_plf: Annotated[float, Field(gt=0, le=10000)]
     vw_nominal_plf: Annotated[float, Field(gt=0, le=15000)]
     Ga_seismic_kips_per_in: Annotated[float, Field(gt=0, le=500)]
     Ga_wind_kips_per_in: Annotated[float, Field(gt=0, le=500)] | None = None
+    face2_sheathing: Literal[WALL_SHEATHING] | None = Field(  # type: ignore[valid-type]
+        None, description="Sheathing type of the opposite face; blank: sheathed on one face."
+    )
+    face2_vs_nominal_plf: Annotated[float, Field(gt=0, le=10000)] | None = None
+    face2_vw_nominal_plf: Annotated[float, Field(gt=0, le=15000)] | None = None
+    face2_Ga_kips_per_in: Annotated[float, Field(gt=0, le=500)] | None = Field(
+        None,
+        description="Apparent shear stiffness of face 2 (wind and seismic), added to face 1's "
+        "for Eq. 4.3-1 where face 2 counts.",
+    )
     end_post_E_psi: Annotated[float, Field(gt=0, le=5.0e7)] = 1.6e6
     end_post_A_in2: Annotated[float, Field(gt=0, le=500)]
-    hold_down_delta_in: Annotated[float, Field(ge=0, le=2.0)]
+    hold_down_delta_in: Annotated[float, Field(ge=0, le=2.0)] = Field(
+        description="Anchorage elongation Δa taken as given (not scaled with the force) for "
+        "segments that give no rated hold-down elongation, in."
+    )
+
+    @model_validator(mode="after")
+    def _face2_complete(self) -> ShearWallAssembly:
+        given = [
+            self.face2_sheathing is not None,
+            self.face2_vs_nominal_plf is not None,
+            self.face2_vw_nominal_plf is not None,
+            self.face2_Ga_kips_per_in is not None,
+        ]
+        if any(given) and not all(given):
+            raise ValueError(
+                "a second face needs face2_sheathing, face2_vs_nominal_plf, "
+                "face2_vw_nominal_plf and face2_Ga_kips_per_in together"
+            )
+        return self
 
 
 class Assemblies(_Strict):
@@ -385,6 +456,48 @@ class Segment(_Strict):
             " published values. Blank: no hold-down check (the Summary says so)."
         ),
     )
+    hold_down_elongation_in: Annotated[float, Field(ge=0, le=2.0)] | None = Field(
+        None,
+        description="Hold-down elongation at its rated load (manufacturer's value), in. Given: "
+        "Δa of Eq. 4.3-1 is this times the hold-down force at the deflection level over the "
+        "rated load, plus shrinkage and crushing. Blank: the assembly's hold_down_delta_in, "
+        "as given.",
+    )
+    hold_down_rated_load_lb: Annotated[float, Field(gt=0, le=1.0e6)] | None = Field(
+        None,
+        description="Load at which hold_down_elongation_in is rated (allowable or design), lb; "
+        "required with it.",
+    )
+    shrinkage_in: Annotated[float, Field(ge=0, le=2.0)] = Field(
+        0.0,
+        description="Wood shrinkage in the anchorage path of this story, added to Δa, in.",
+    )
+    crushing_in: Annotated[float, Field(ge=0, le=1.0)] = Field(
+        0.0,
+        description="Crushing of the sill or bearing under the compression post, added to Δa, in.",
+    )
+    post_D_lb: Annotated[float, Field(ge=0, le=1.0e6)] | None = Field(
+        None,
+        description="Tributary dead load on the compression end post (the larger end), lb, "
+        "added to the dead point load in the compression combinations. Blank with the other "
+        "post loads blank: the compression column is the overturning part and dead point load "
+        "only.",
+    )
+    post_L_lb: Annotated[float, Field(ge=0, le=1.0e6)] | None = Field(
+        None, description="Tributary floor live load L on the end post, lb."
+    )
+    post_Lr_lb: Annotated[float, Field(ge=0, le=1.0e6)] | None = Field(
+        None, description="Tributary roof live load Lr on the end post, lb."
+    )
+    post_S_lb: Annotated[float, Field(ge=0, le=1.0e6)] | None = Field(
+        None, description="Tributary snow load S on the end post, lb."
+    )
+    sill_anchor_capacity_lb: Annotated[float, Field(gt=0, le=1.0e5)] | None = Field(
+        None,
+        description="Lateral capacity of one sill anchor bolt or fastener at the design "
+        "method's level, lb (bottom story only): gives the required spacing. Blank: no "
+        "anchorage spacing.",
+    )
 
 
 class Opening(_Strict):
@@ -412,6 +525,18 @@ class WallLine(_Strict):
     stories: list[LineStory] = Field(min_length=1, max_length=MAX_LEVELS)
 
 
+class ShearWallOptions(_Strict):
+    """Choices for the shear-wall checks."""
+
+    line_distribution: Literal["deflection", "capacity"] = Field(
+        "deflection",
+        description="How a line's shear is shared by its segments (AWC SDPWS-2015 §4.3.3.4.1): "
+        "'deflection' (the same top displacement by Eq. 4.3-1, the rule; two fixed passes "
+        "because Δa depends on the hold-down force) or 'capacity' (the Exception: in proportion "
+        "to L k v, the segments' design capacities).",
+    )
+
+
 class DiaphragmOptions(_Strict):
     """Choices for the diaphragm checks."""
 
@@ -429,6 +554,13 @@ class DriftLimits(_Strict):
     ] = Field("all_other", description="ASCE 7-16 Table 12.12-1 row.")
     wind_ratio: Annotated[float, Field(ge=100, le=2000)] = Field(
         400, description="Wind drift limit h/ratio: serviceability, common practice, no code limit."
+    )
+    wind_serviceability_factor: Annotated[float, Field(ge=0.2, le=1.0)] = Field(
+        0.42,
+        description="Factor on strength-level W for the wind drift check (serviceability). "
+        "Default 0.42: about the 10-year mean recurrence interval wind of the ASCE 7-16 "
+        "Appendix C commentary (CC.2.2), the factor IBC 2018 Table 1604.3 note f allows for "
+        "deflection (common practice). 1.0: strength-level W.",
     )
 
 
@@ -450,6 +582,7 @@ class Spec(_Strict):
     wall_lines: list[WallLine] = Field(default_factory=list, max_length=MAX_WALL_LINES)
     drift: DriftLimits = DriftLimits()
     diaphragms: DiaphragmOptions = DiaphragmOptions()
+    shear_walls: ShearWallOptions = ShearWallOptions()
 
     @model_validator(mode="after")
     def _some_load(self) -> Spec:

@@ -4,10 +4,11 @@ from __future__ import annotations
 
 from collections.abc import Iterator
 
-from latbook.engine.sdpws import shear_wall
+from latbook.engine.sdpws import shear_wall, sheathing
 from latbook.problems import Problem, json_path
 from latbook.spec.models import Level, Spec, WallLine
 from latbook.spec.plan_geometry import DIRECTIONS, POSITION_TOLERANCE_FT, resisting_lines
+from latbook.spec.wall_heights import level_below, segment_height_ft, story_height_ft
 from latbook.spec.wall_stories import stacking_gaps
 
 _EPS_FT = 1e-6
@@ -28,7 +29,12 @@ def check_rules(spec: Spec) -> list[Problem]:
         *_seismic(spec),
     ]
     if not problems and spec.wall_lines:
-        problems += [*_stacking(spec), *_distinct_positions(spec), *_some_segment_qualifies(spec)]
+        problems += [
+            *_stacking(spec),
+            *_distinct_positions(spec),
+            *_wall_heights(spec),
+            *_some_segment_qualifies(spec),
+        ]
     if not problems:
         problems += _seismic_analysis(spec)
     return problems
@@ -176,29 +182,59 @@ def _distinct_positions(spec: Spec) -> Iterator[Problem]:
 
 
 def _some_segment_qualifies(spec: Spec) -> Iterator[Problem]:
-    """A line story carries shear only through segments within the aspect-ratio limit."""
-    ordered = sorted(spec.building.levels, key=lambda lv: lv.elevation_ft)
-    base_ft = {lv.id: (ordered[i - 1].elevation_ft if i else 0.0) for i, lv in enumerate(ordered)}
-    elevation = {lv.id: lv.elevation_ft for lv in ordered}
-    limit = shear_wall.ASPECT_RATIO_LIMIT_WSP
+    """A line story carries shear only through segments within their sheathing's aspect-ratio
+    limit (face 1, AWC SDPWS-2015 Table 4.3.4)."""
+    kinds = {a.id: a.sheathing for a in spec.assemblies.shear_walls}
+    levels = {lv.id: lv for lv in spec.building.levels}
     for li, line in enumerate(spec.wall_lines):
         for si, story in enumerate(line.stories):
             if not story.segments:
                 continue
-            story_ft = elevation[story.level] - base_ft[story.level]
-            heights = [story_ft if s.height_ft is None else s.height_ft for s in story.segments]
+            level = levels[story.level]
+            below = level_below(spec, level)
             if any(
-                shear_wall.meets_aspect_ratio_limit_wsp(h, seg.length_ft)
-                for h, seg in zip(heights, story.segments, strict=True)
+                sheathing.meets_wall_aspect_limit(
+                    shear_wall.aspect_ratio(segment_height_ft(level, below, seg), seg.length_ft),
+                    kinds[seg.assembly],
+                )
+                for seg in story.segments
             ):
                 continue
             yield Problem(
                 json_path(("wall_lines", li, "stories", si, "segments")),
                 "aspect_ratio",
                 f"no segment of line '{line.id}' in the story below level '{story.level}' meets "
-                f"h/bs <= {limit:g} (AWC SDPWS-2015 Table 4.3.4): the line has no shear wall "
-                "to resist its load; lengthen a segment or lower its height",
+                "the aspect-ratio limit h/bs of its sheathing (AWC SDPWS-2015 Table 4.3.4): the "
+                "line has no shear wall to resist its load; lengthen a segment or lower its height",
             )
+
+
+def _wall_heights(spec: Spec) -> Iterator[Problem]:
+    """A sheathed wall fits in its story: wall heights at most the story height."""
+    for i, level in enumerate(spec.building.levels):
+        below = level_below(spec, level)
+        story_ft = story_height_ft(level, below)
+        if level.wall_height_ft is not None and level.wall_height_ft > story_ft + _EPS_FT:
+            yield Problem(
+                json_path(("building", "levels", i, "wall_height_ft")),
+                "wall_height",
+                f"wall height {level.wall_height_ft:g} ft is taller than the story below level "
+                f"'{level.id}' ({story_ft:g} ft); the sheathed wall fits within its story",
+            )
+    levels = {lv.id: lv for lv in spec.building.levels}
+    for li, line in enumerate(spec.wall_lines):
+        for si, story in enumerate(line.stories):
+            level = levels[story.level]
+            story_ft = story_height_ft(level, level_below(spec, level))
+            for gi, seg in enumerate(story.segments):
+                if seg.height_ft is not None and seg.height_ft > story_ft + _EPS_FT:
+                    yield Problem(
+                        json_path(("wall_lines", li, "stories", si, "segments", gi, "height_ft")),
+                        "wall_height",
+                        f"segment height {seg.height_ft:g} ft is taller than its story (below "
+                        f"level '{level.id}', {story_ft:g} ft); the sheathed wall fits within "
+                        "its story",
+                    )
 
 
 def _line_story(line, level, story, spath, walls) -> Iterator[Problem]:
@@ -235,6 +271,14 @@ def _line_story(line, level, story, spath, walls) -> Iterator[Problem]:
                 json_path((*gpath, "length_ft")),
                 "inside_line",
                 f"segment ends at {end:g} ft, past the line's length {length:g} ft",
+            )
+        if seg.hold_down_elongation_in is not None and seg.hold_down_rated_load_lb is None:
+            yield Problem(
+                json_path((*gpath, "hold_down_rated_load_lb")),
+                "rated_load",
+                "a rated hold-down elongation needs the load it is rated at "
+                "(hold_down_rated_load_lb): Δa is scaled from it to the hold-down force "
+                "(AWC SDPWS-2015 Eq. 4.3-1)",
             )
         if seg.hold_down_offset_ft * 2 >= seg.length_ft:
             yield Problem(

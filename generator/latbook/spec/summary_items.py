@@ -15,6 +15,7 @@ from latbook.spec.wall_stories import levels_top_down, wall_stories
 SOURCE_TEXT = {"seis": "seismic", "wind": "wind"}
 DIAPHRAGM_FAMILIES = (
     ("diaph", "diaphragm", "-"),
+    ("diaph_ar", "diaphragm aspect ratio", "-"),
     ("chord", "chord", "lb"),
     ("collector", "collector", "lb"),
 )
@@ -24,7 +25,8 @@ DIAPHRAGM_FAMILIES = (
 @dataclass(frozen=True)
 class SummaryItem:
     key: str
-    kind: str  # "diaph", "chord", "collector", "cantilever", "wall", "hold_down", "drift"
+    kind: str  # "diaph", "diaph_ar", "chord", "collector", "cantilever", "wall", "hold_down",
+    # "drift"
     family: str
     source: str  # "seis", "wind" or "both"
     level: str = ""

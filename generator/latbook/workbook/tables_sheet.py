@@ -21,7 +21,7 @@ def write_tables(wb: Workbook, ws: Worksheet, tables: dict[str, Any], styles: St
     """Write every reference table and define its names; returns the last row used."""
     ws.set_column(0, 0, 30)
     ws.set_column(1, 8, 12)
-    ws.write_string(0, 0, "Reference tables (ASCE 7-16)", styles.get("title"))
+    ws.write_string(0, 0, "Reference tables (ASCE 7-16, AWC SDPWS-2015)", styles.get("title"))
     row = 2
     for table in tables.values():
         row = _write_table(wb, ws, table, row, styles) + 1

@@ -49,6 +49,24 @@ def wall_collections(spec: Spec) -> dict[str, Rows]:
             }
             for ln in story.lines
         ]
+    base = stories[-1]
+    variants = [
+        v
+        for v, on in (("seismic_wind", spec.seismic and spec.wind), ("seismic", spec.seismic))
+        if on
+    ]
+    out["base_segments"] = [
+        {
+            "level": base.level.id,
+            "sid": seg.key,
+            "label": f"line {seg.line.id} seg {seg.segment.id}",
+            "assembly": seg.segment.assembly,
+            "seg_in": segment_input_key(base.level.id, seg.line.id, seg.segment.id),
+            "row_label": f"base line {seg.line.id} seg {seg.segment.id}",
+            "variants": variants,
+        }
+        for seg in base.segments
+    ]
     out["sw_assemblies"] = [
         {
             "assembly": a.id,
@@ -68,9 +86,9 @@ def wall_collections(spec: Spec) -> dict[str, Rows]:
             "src": item.source,
             "unit": item.unit,
             "row_label": item.key,
-            "variants": item.variants,
+            "variants": item.variants + (["first"] if n == 0 else []),
         }
-        for item in summary_items(spec)
+        for n, item in enumerate(summary_items(spec))
     ]
     return out
 
@@ -83,6 +101,7 @@ def _line_rows(story: StoryPlace) -> Rows:
             "dir": ln.line.direction,
             "above": ln.above,
             "last_seg": ln.segments[-1].key,
+            "li": ln.line_index,
             "row_label": f"line {ln.line.id}",
             "variants": ["has_above"] if ln.above else [],
         }
@@ -97,8 +116,12 @@ def _segment_rows(story: StoryPlace, top: bool) -> Rows:
             variants = ["top"] if top else []
             if seg.segment_index == 0:
                 variants.append("first_in_line")
+            if not rows:
+                variants.append("first_in_story")
             if seg.stacked_from_above:
                 variants.append("stacked")
+            if seg.segment.hold_down_continues_below and story.below is not None:
+                variants.append("stacks_below")
             rows.append(
                 {
                     "level": story.level.id,
@@ -108,6 +131,7 @@ def _segment_rows(story: StoryPlace, top: bool) -> Rows:
                     "sid": seg.key,
                     "assembly": seg.segment.assembly,
                     "above": ln.above,
+                    "li": ln.line_index,
                     "seg_in": segment_input_key(story.level.id, ln.line.id, seg.segment.id),
                     "label": f"line {ln.line.id} seg {seg.segment.id}",
                     "row_label": f"line {ln.line.id} seg {seg.segment.id}",

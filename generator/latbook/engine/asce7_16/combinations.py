@@ -200,3 +200,43 @@ def lateral_factors(method: str, SDS_g: float, rho: float, Omega0: float) -> Lat
     if normalized == "ASD":
         return _asd_factors(SDS_g, rho, Omega0)
     return _lrfd_factors(SDS_g, rho, Omega0)
+
+
+@dataclass(frozen=True)
+class GravityLateralCombination:
+    """A combination with live and roof/snow loads and a reduced lateral term, the one that
+    bounds end-post compression with gravity (ASCE 7-16 §2.3.1, §2.3.6, §2.4.1, §2.4.5)."""
+
+    name: str
+    lateral: float
+    D: float
+    L: float
+    Lr: float
+    S: float
+
+
+def gravity_lateral_combination(
+    method: str, source: str, SDS_g: float = 0.0, rho: float = 1.0
+) -> GravityLateralCombination:
+    """ASD D + 0.75L + 0.75(0.6W) + 0.75(Lr or S or R) (§2.4.1 comb. 6a) and
+    (1.0 + 0.105SDS)D + 0.525ρQE + 0.75L + 0.75(Lr or S or R) (§2.4.5 comb. 9); LRFD
+    1.2D + 1.0W + L + 0.5(Lr or S or R) (§2.3.1 comb. 4) and (1.2 + 0.2SDS)D + ρQE + L + 0.2S
+    (§2.3.6 comb. 6); source "wind" or "seis". The 0.5L exception is not taken."""
+    m = validate_method(method)
+    if source == "wind":
+        if m == "ASD":
+            name = "ASD D + 0.75L + 0.75(0.6W) + 0.75(Lr or S or R) (ASCE 7-16 §2.4.1, comb. 6a)"
+            return GravityLateralCombination(name, 0.45, 1.0, 0.75, 0.75, 0.75)
+        name = "LRFD 1.2D + 1.0W + L + 0.5(Lr or S or R) (ASCE 7-16 §2.3.1, comb. 4)"
+        return GravityLateralCombination(name, 1.0, 1.2, 1.0, 0.5, 0.5)
+    r = validate_redundancy_factor(rho)
+    if m == "ASD":
+        name = (
+            "ASD (1.0 + 0.105SDS)D + 0.525ρQE + 0.75L + 0.75(Lr or S or R), ρ = "
+            f"{rho_text(r)} (ASCE 7-16 §2.4.5, comb. 9)"
+        )
+        return GravityLateralCombination(name, 0.525 * r, 1.0 + 0.105 * SDS_g, 0.75, 0.75, 0.75)
+    name = (
+        f"LRFD (1.2 + 0.2SDS)D + 1.0ρQE + L + 0.2S, ρ = {rho_text(r)} (ASCE 7-16 §2.3.6, comb. 6)"
+    )
+    return GravityLateralCombination(name, r, 1.2 + 0.2 * SDS_g, 1.0, 0.0, 0.2)

@@ -23,6 +23,12 @@ ALLOWABLE_DRIFT: dict[str, dict[RiskCategoryGroup, float]] = {
 """Allowable story drift Delta_a as a coefficient of hsx, ASCE 7-16 Table 12.12-1
 (from memory); keys are latbook's own row names."""
 
+WIND_SERVICEABILITY_FACTOR = 0.42
+"""Factor on strength-level W for drift: about the 10-year mean recurrence interval wind of
+the ASCE 7-16 Appendix C commentary (CC.2.2); IBC 2018 Table 1604.3 note f allows 0.42 for
+deflection (common practice; the IBC note from memory, its equivalence to the 10-year wind as
+read in an ASCE standards forum discussion)."""
+
 WIND_DRIFT_RATIO_COMMON_PRACTICE = 1.0 / 400.0
 """Serviceability wind drift ratio often used, h/400 (common practice; no ASCE 7-16 limit)."""
 
@@ -71,3 +77,12 @@ def drift_ratio(delta_in: float, h_ft: float) -> float:
     if h_ft <= 0:
         raise ValueError("height must be positive")
     return delta_in / (h_ft * 12.0)
+
+
+def serviceability_deflection_in(delta_in: float, constant_in: float, factor: float) -> float:
+    """Deflection at the serviceability wind: the force-driven part scaled by `factor`, the
+    part that does not depend on the force (shrinkage, crushing) whole:
+    factor (delta - constant) + constant, elastic scaling (ASCE 7-16 App. C commentary) [in]."""
+    if not 0 < factor <= 1:
+        raise ValueError("the serviceability factor must be in (0, 1]")
+    return factor * (delta_in - constant_in) + constant_in

@@ -240,3 +240,23 @@ def shear_wall_deflection_in(
         + deflection_shear_in(v_plf, h_ft, Ga_kips_per_in)
         + deflection_anchorage_in(h_ft, delta_a_in, b_ft)
     )
+
+
+def chord_rotation_rad(
+    M_top_lbft: float, M_base_lbft: float, h_ft: float, E_psi: float, A_in2: float, b_ft: float
+) -> float:
+    """Rotation of a segment's top relative to its base from the axial strain of its two end
+    posts, h (M_top + M_base) / (E A b^2): chord forces M/b varying linearly over the height;
+    with M_top = 0 it is the slope of the bending term of Eq. 4.3-1 (1.5 x 8vh^3/(EAb) / h),
+    mechanics of materials [rad] (M lb-ft, h ft, E psi, A in^2, b ft)."""
+    if E_psi <= 0 or A_in2 <= 0 or b_ft <= 0:
+        raise ValueError("E, A and b must be positive")
+    return h_ft * (M_top_lbft + M_base_lbft) / (E_psi * A_in2 * b_ft**2)
+
+
+def anchorage_rotation_rad(delta_a_in: float, b_ft: float) -> float:
+    """Rigid-body rotation of a segment from its anchorage elongation, Δa / b (the anchorage
+    term of Eq. 4.3-1 over h) [rad] (Δa in, b ft)."""
+    if b_ft <= 0:
+        raise ValueError("b must be positive")
+    return delta_a_in / (12.0 * b_ft)
