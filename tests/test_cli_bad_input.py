@@ -71,6 +71,38 @@ CASES = [
     ),
     ("wind.enclosure", "open", "$.wind.enclosure", "literal_error"),
     ("wind.roof_slope_deg", 20.0, "$.wind.roof_slope_deg", "less_than_equal"),
+    # a rated hold-down elongation is scaled from its rated load (SDPWS-2015 Eq. 4.3-1 Δa)
+    (
+        "wall_lines.0.stories.0.segments.0.hold_down_elongation_in",
+        0.1,
+        "$.wall_lines[0].stories[0].segments[0].hold_down_rated_load_lb",
+        "rated_load",
+    ),
+    # a sheathed wall taller than its story (the demo's stories are 10.5 ft)
+    (
+        "wall_lines.0.stories.0.segments.0.height_ft",
+        11.0,
+        "$.wall_lines[0].stories[0].segments[0].height_ft",
+        "wall_height",
+    ),
+    (
+        "building.levels.0.wall_height_ft",
+        12.0,
+        "$.building.levels[0].wall_height_ft",
+        "wall_height",
+    ),
+    (
+        "assemblies.shear_walls.0.sheathing",
+        "cardboard",
+        "$.assemblies.shear_walls[0].sheathing",
+        "literal_error",
+    ),
+    (
+        "drift.wind_serviceability_factor",
+        0.1,
+        "$.drift.wind_serviceability_factor",
+        "greater_than_equal",
+    ),
 ]
 
 

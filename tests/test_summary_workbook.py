@@ -164,10 +164,13 @@ def test_hold_down_over_its_capacity_fails_in_text(fails):
     assert cell("walls.RF.T_dcr_seis_missing") == 4
     # A given capacity that fails shows even while others are blank.
     assert cell("summary.hold_down.RF.seis.dcr") == pytest.approx(T / SMALL_CAPACITY_LB, rel=REL)
-    assert cell("summary.hold_down.RF.seis.element") == "line A seg A1"
+    assert cell("summary.hold_down.RF.seis.element") == "story below RF: line A seg A1"
     assert cell("summary.hold_down.RF.seis.status") == "FAILS"
     assert cell("summary.hold_down.RF.seis.marker") == "<<<"
-    assert cell("summary.overall").startswith("FAILS")
+    # the overall status also names the hold-downs that were not checked, with their story
+    overall = cell("summary.overall")
+    assert overall.startswith("FAILS")
+    assert "no capacity for story below RF: line B seg B1; " in overall
 
 
 def test_hold_down_within_its_capacity_is_ok(passes):
@@ -186,15 +189,22 @@ def test_hold_down_within_its_capacity_is_ok(passes):
 
 
 def test_hold_down_without_capacity_says_so(unchecked):
+    # A check that could not be made is never ok: the row says so and names every segment
+    # (with its story) that lifts without a capacity; the overall status is INCOMPLETE.
     cell = unchecked
     assert cell("walls.RF.T_dcr_seis_gov") == "none with a capacity"
-    assert cell("summary.hold_down.RF.seis.dcr") == "not given"
-    assert cell("summary.hold_down.RF.seis.status") == NO_CAPACITY
+    assert cell("summary.hold_down.RF.seis.dcr") == 0
+    assert cell("summary.hold_down.RF.seis.status") == "not checked: no hold-down capacity"
     assert cell("summary.hold_down.RF.seis.marker") == "-"
     assert cell("summary.hold_down.RF.seis.demand") == pytest.approx(
         cell("walls.RF.T_seis_max"), rel=REL
     )
-    assert cell("summary.hold_down.RF.seis.element") == cell("walls.RF.T_seis_gov")
+    missing = cell("walls.RF.T_dcr_seis_missing")
+    assert missing >= 1
+    element = cell("summary.hold_down.RF.seis.element")
+    assert element.startswith("story below RF: line ") and f"({missing} in all)" in element
+    assert cell("summary.overall").startswith("INCOMPLETE")
+    assert element in cell("summary.overall")
 
 
 def test_chord_row_is_the_simple_span_chord_force(box):

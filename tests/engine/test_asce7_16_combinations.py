@@ -102,3 +102,17 @@ def test_method_must_be_asd_or_lrfd():
     assert combos.lateral_factors("lrfd", SDS_G, 1.0, 2.5).method == "LRFD"
     with pytest.raises(ValueError, match="method"):
         combos.lateral_factors("WSD", SDS_G, 1.0, 2.5)
+
+
+def test_gravity_lateral_combinations_for_end_posts():
+    # ASCE 7-16 §2.4.1 comb. 6a: D + 0.75L + 0.75(0.6W) + 0.75(Lr or S or R) (from memory)
+    g = combos.gravity_lateral_combination("ASD", "wind")
+    assert (g.lateral, g.D, g.L, g.Lr, g.S) == pytest.approx((0.45, 1.0, 0.75, 0.75, 0.75))
+    # §2.4.5 comb. 9: (1.0 + 0.105SDS)D + 0.525ρQE + 0.75L + 0.75(Lr or S or R) (from memory)
+    g = combos.gravity_lateral_combination("ASD", "seis", SDS_g=1.0, rho=1.3)
+    assert (g.lateral, g.D, g.L, g.S) == pytest.approx((0.6825, 1.105, 0.75, 0.75))
+    # LRFD §2.3.1 comb. 4 and §2.3.6 comb. 6 (from memory)
+    g = combos.gravity_lateral_combination("LRFD", "wind")
+    assert (g.lateral, g.D, g.L, g.Lr, g.S) == pytest.approx((1.0, 1.2, 1.0, 0.5, 0.5))
+    g = combos.gravity_lateral_combination("LRFD", "seis", SDS_g=0.5, rho=1.0)
+    assert (g.lateral, g.D, g.L, g.Lr, g.S) == pytest.approx((1.0, 1.3, 1.0, 0.0, 0.2))

@@ -65,3 +65,11 @@ def test_bad_inputs_are_refused():
         allowable_story_drift_in("no_such_row", "II", 10.0)
     with pytest.raises(ValueError):
         allowable_story_drift_in("all_other", "V", 10.0)
+
+
+def test_serviceability_wind_scales_the_force_driven_part_only():
+    # Derived: 0.42 x (1.0 - 0.2) + 0.2 = 0.536 in; default factor 0.42 (common practice)
+    from latbook.engine.asce7_16 import drift
+
+    assert drift.serviceability_deflection_in(1.0, 0.2, 0.42) == pytest.approx(0.536)
+    assert drift.WIND_SERVICEABILITY_FACTOR == 0.42

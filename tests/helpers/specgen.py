@@ -124,6 +124,11 @@ def make_spec(
             "wind_ratio": rng.choice((240, 360, 400, 500, 600)),
         },
     }
+    side = random.Random(f"options|{top_ft}|{n_levels}")
+    if side.random() < 0.3:
+        spec["shear_walls"] = {"line_distribution": "capacity"}
+    if side.random() < 0.4:
+        spec["drift"]["wind_serviceability_factor"] = side.choice((0.42, 0.7, 1.0))
     if seismic is not None:
         spec["seismic"] = _seismic(rng, seismic)
         _seismic_basis(spec, site, rho_method, limit_Ss_for_Cs)
@@ -139,7 +144,9 @@ def make_spec(
 WEIGHT_RANGE_KIP = (1e-9, 1e6)
 # Level ids equal to parts of sheet names; all valid ('in' is not: Walls_in is a sheet).
 SHEET_PART_IDS = ("x", "y", "Dia", "Walls", "Wind", "Inputs", "Lines", "Summary", "Index")
-_NOT_NUDGED = {"rho"}  # a choice of 1.0 or 1.3, not a measure
+# rho: a choice of 1.0 or 1.3, not a measure; Omega0: 2.5 or 3.0, where note g's reduction
+# needs at least 2.5 (nudged down it would break that rule)
+_NOT_NUDGED = {"rho", "Omega0"}
 _NUDGED_DOWN = {"Omega0"}  # drawn up to its upper limit (3.0)
 
 
@@ -299,6 +306,10 @@ def _levels(rng, n_levels, plan, ids: _IdMaker) -> list[dict[str, Any]]:
         }
         if rng.random() < 0.5:
             level["name"] = f"Level {i + 2}"
+        side = random.Random(f"wall height|{elevation_ft}|{i}")
+        if side.random() < 0.4:
+            story_ft = elevation_ft - (levels[-1]["elevation_ft"] if levels else 0.0)
+            level["wall_height_ft"] = _r(story_ft - side.uniform(0.5, 1.5))
         levels.append(level)
     return levels
 
@@ -333,8 +344,30 @@ def _assemblies(rng, ids: _IdMaker) -> dict[str, list[dict[str, Any]]]:
         }
         if rng.random() < 0.5:
             wall["Ga_wind_kips_per_in"] = _r(rng.uniform(8, 40), 1)
+        _sheathing(random.Random(f"sheathing|{vs}|{i}"), wall)
         walls.append(wall)
     return {"diaphragms": diaphragms, "shear_walls": walls}
+
+
+FACE_1_SHEATHING = ("wsp_blocked", "structural_fiberboard")  # both 3.5:1 (Table 4.3.4)
+FACE_2_SHEATHING = (
+    "wsp_blocked",
+    "gypsum_board_blocked",
+    "gypsum_board_unblocked",
+    "wsp_unblocked",
+)
+
+
+def _sheathing(side: random.Random, wall: dict[str, Any]) -> None:
+    """A side stream (existing seeds keep their specs): face 1 sheathing with the 3.5:1 limit
+    the segment lengths assume, sometimes a second face, sometimes a rated hold-down."""
+    if side.random() < 0.3:
+        wall["sheathing"] = side.choice(FACE_1_SHEATHING)
+    if side.random() < 0.35:
+        wall["face2_sheathing"] = side.choice(FACE_2_SHEATHING)
+        wall["face2_vs_nominal_plf"] = _r(side.uniform(150, 700), 0)
+        wall["face2_vw_nominal_plf"] = _r(wall["face2_vs_nominal_plf"] * 1.4, 0)
+        wall["face2_Ga_kips_per_in"] = _r(side.uniform(4, 20), 1)
 
 
 def _wall_lines(rng, direction, n_lines, levels, plan, wall_ids, ids: _IdMaker) -> list[dict]:
@@ -433,6 +466,19 @@ def _segment(rng, seg_id, start_ft, length_ft, wall_ids, has_story_below) -> dic
         segment["hold_down_capacity_lb"] = _r(side.uniform(1500, 20000), 0)
     if side.random() < 0.3:
         segment["roof_bearing_width_ft"] = _r(side.choice((0.0, side.uniform(1, 30))), 2)
+    # a further side stream: rated hold-down slip, shrinkage, post loads, sill anchors
+    more = random.Random(f"anchorage|{seg_id}|{start_ft}|{length_ft}")
+    if more.random() < 0.5:
+        segment["hold_down_elongation_in"] = _r(more.uniform(0.03, 0.2), 3)
+        segment["hold_down_rated_load_lb"] = _r(more.uniform(2000, 15000), 0)
+    if more.random() < 0.3:
+        segment["shrinkage_in"] = _r(more.uniform(0.0, 0.15), 3)
+        segment["crushing_in"] = _r(more.uniform(0.0, 0.04), 3)
+    if more.random() < 0.3:
+        for key in more.sample(("post_D_lb", "post_L_lb", "post_Lr_lb", "post_S_lb"), 2):
+            segment[key] = _r(more.uniform(0, 6000), 0)
+    if more.random() < 0.4:
+        segment["sill_anchor_capacity_lb"] = _r(more.uniform(600, 3000), 0)
     return segment
 
 
