@@ -70,3 +70,23 @@ def test_sdc_rows(name, func):
         probe = bound + 1e-6
         assert func(probe, "II") == low_rc
         assert func(probe, "IV") == rc_iv
+
+
+def test_shear_wall_sheathing_rows():
+    # SDPWS-2015 Table 4.3.4 and §4.3.4 factors (from memory), both copies
+    from latbook.engine.sdpws import sheathing
+
+    t = TABLES["SW_sheathing"]
+    assert t["rows"] == list(sheathing.WALL_SHEATHING)
+    for kind, values in zip(t["rows"], t["values"], strict=True):
+        row = sheathing.WALL_SHEATHING[kind]
+        assert values == [row.limit, row.r0, *row.defl, *row.cap, row.wind_sum_group]
+
+
+def test_diaphragm_sheathing_rows():
+    from latbook.engine.sdpws import sheathing
+
+    t = TABLES["Dia_sheathing"]
+    assert t["rows"] == list(sheathing.DIAPHRAGM_ASPECT_LIMITS)
+    for kind, (limit,) in zip(t["rows"], t["values"], strict=True):
+        assert limit == sheathing.diaphragm_aspect_limit(kind)

@@ -21,6 +21,7 @@ from tests.helpers.parity import compare, formula_errors
 
 DEMO = Path(__file__).resolve().parents[1] / "out_examples/maple_terrace/spec.json"
 STORIES_TOP_DOWN = ("RF", "L3", "L2")
+WALL_FT = 9.25  # the demo's sheathed wall height in every story (10.5 ft stories)
 REL = 1e-9
 
 
@@ -46,9 +47,9 @@ def _narrow_segments_wind_lrfd_spec() -> dict:
     data["design_method"] = "LRFD"
     for level, seg in _segments(data, "B"):
         if level == "RF" and seg["id"] == "B1":
-            seg["length_ft"] = 4.0  # h/bs = 10.5 / 4 = 2.625: k = 2bs/h
+            seg["length_ft"] = 4.0  # h/bs = 9.25 / 4 = 2.3125: k = 2bs/h
         if level == "RF" and seg["id"] == "B2":
-            seg["length_ft"] = 2.5  # h/bs = 4.2 > 3.5: not a shear wall
+            seg["length_ft"] = 2.5  # h/bs = 3.7 > 3.5: not a shear wall
     return data
 
 
@@ -112,10 +113,10 @@ def test_dead_load_moment_above_overturning_needs_no_hold_down(stacked, level, s
 
 def test_net_uplift_is_overturning_over_the_hold_down_arm(stacked):
     # Statics (AWC Manual M14.3 form): with no dead load, T = M_ot / (L - offset),
-    # M_ot = factored segment shear x height; 14 ft segment, offset 0.29 ft.
+    # M_ot = factored segment shear x wall height (9.25 ft, demo); 14 ft segment, offset 0.29 ft.
     _, _, cell = stacked
     base = "walls.RF.seg.A.A3"
-    M_ot = cell("combo.Fac_E") * cell(f"{base}.V_seis") * 10.5
+    M_ot = cell("combo.Fac_E") * cell(f"{base}.V_seis") * WALL_FT
     assert cell(f"{base}.M_ot_seis") == pytest.approx(M_ot, rel=REL)
     assert cell(f"{base}.uplift_seis") == pytest.approx(M_ot / (14.0 - 0.29), rel=REL)
     assert cell(f"{base}.uplift_seis") > 0
@@ -155,14 +156,14 @@ def test_summary_marks_failing_rows_in_text(stacked):
 
 
 def test_segment_past_two_to_one_takes_k_two_b_over_h(narrow):
-    # SDPWS-2015 §4.3.3.4.1 Exception (from memory): k = 2bs/h = 2 x 4 / 10.5.
+    # SDPWS-2015 §4.3.3.4.1 Exception (from memory): k = 2bs/h = 2 x 4 / 9.25.
     _, _, cell = narrow
-    assert cell("walls.RF.seg.B.B1.k") == pytest.approx(2 * 4.0 / 10.5, rel=REL)
-    assert cell("walls.RF.line.B.sum_Lk") == pytest.approx(4.0 * 2 * 4.0 / 10.5, rel=REL)
+    assert cell("walls.RF.seg.B.B1.k") == pytest.approx(2 * 4.0 / WALL_FT, rel=REL)
+    assert cell("walls.RF.line.B.sum_Lk") == pytest.approx(4.0 * 2 * 4.0 / WALL_FT, rel=REL)
 
 
 def test_segment_past_the_limit_is_not_a_shear_wall(narrow):
-    # SDPWS-2015 Table 4.3.4 (from memory): h/bs = 10.5 / 2.5 = 4.2 > 3.5.
+    # SDPWS-2015 Table 4.3.4 (from memory): h/bs = 9.25 / 2.5 = 3.7 > 3.5.
     _, _, cell = narrow
     assert cell("walls.RF.seg.B.B2.k") == 0
     assert cell("walls.RF.seg.B.B2.ok") == "no: h/bs > 3.5"
@@ -171,9 +172,9 @@ def test_segment_past_the_limit_is_not_a_shear_wall(narrow):
 
 def test_lrfd_wind_capacity_is_point_eight_nominal(narrow):
     # SDPWS-2015 §4.3.3: LRFD design unit shear = 0.80 x nominal; SW1 vw = 730 plf (demo);
-    # shared by deflection, B1 at h/bs = 2.625 takes the §4.3.4.2 factor 1.25 - 0.125 h/bs
-    # (from memory); C1 at h/bs = 0.525 takes none.
+    # shared by deflection, B1 at h/bs = 2.3125 takes the §4.3.4.2 factor 1.25 - 0.125 h/bs
+    # (from memory); C1 at h/bs = 0.46 takes none.
     _, _, cell = narrow
-    f_ar = 1.25 - 0.125 * 10.5 / 4.0
+    f_ar = 1.25 - 0.125 * WALL_FT / 4.0
     assert cell("walls.RF.seg.B.B1.cap_wind") == pytest.approx(0.8 * 730 * f_ar, rel=REL)
     assert cell("walls.RF.seg.C.C1.cap_wind") == pytest.approx(0.8 * 730, rel=REL)

@@ -202,7 +202,7 @@ def test_hold_down_without_capacity_says_so(unchecked):
     missing = cell("walls.RF.T_dcr_seis_missing")
     assert missing >= 1
     element = cell("summary.hold_down.RF.seis.element")
-    assert element.startswith("story below RF: line ") and f"({missing} in all)" in element
+    assert element.startswith("story below RF: line ") and f"({missing:g} in all)" in element
     assert cell("summary.overall").startswith("INCOMPLETE")
     assert element in cell("summary.overall")
 
