@@ -14,10 +14,11 @@ from __future__ import annotations
 from dataclasses import dataclass
 from typing import Any
 
-from latbook.analysis.shear_walls import qualifying_factor, story_height_ft
 from latbook.engine.asce7_16 import irregularity as irr
 from latbook.engine.asce7_16 import redundancy as red
+from latbook.engine.sdpws import sheathing
 from latbook.spec.models import Spec
+from latbook.spec.wall_heights import segment_height_ft, story_height_ft
 from latbook.spec.wall_stories import SegmentPlace, StoryPlace, wall_stories
 
 EPS_FT = 1e-6
@@ -161,13 +162,14 @@ def regularity_results(
     unsupported = 0
     for sd in rows:
         lv = sd.story.level.id
-        hsx = story_height_ft(sd.story)
+        hsx = story_height_ft(sd.story.level, sd.story.below)
         segs = []
         for seg in sd.segments:
             a = walls[seg.segment.assembly]
-            h = seg.segment.height_ft if seg.segment.height_ft is not None else hsx
+            # the walls sheets' sheathed height and capacity-basis k (SDPWS-2015 §4.3.4)
+            h = segment_height_ft(sd.story.level, sd.story.below, seg.segment)
             L = seg.segment.length_ft
-            k = qualifying_factor(h / L)
+            k = sheathing.wall_aspect_factor(h / L, a.sheathing, "capacity")
             stiff = (
                 irr.segment_stiffness_lb_per_in(
                     h, L, a.end_post_E_psi, a.end_post_A_in2, a.Ga_seismic_kips_per_in
