@@ -24,7 +24,7 @@ DEMO = ROOT / "out_examples/maple_terrace/spec.json"
 ONE_STOREY = ROOT / "out_examples/harbor_workshop/spec.json"
 WEIGHT_PATH = "$.building.levels[0].seismic_weight_kip"  # level L2: 132 kip in the demo
 WEIGHT_ID = "level.L2.seismic_weight_kip"
-HEAVIER_KIP = 220.0  # pushes the L2 seismic hold-downs past a DCR of 1.0
+HEAVIER_KIP = 280.0  # pushes the L2 seismic shear walls past a DCR of 1.0 (and nothing else)
 
 
 def _demo() -> dict:
@@ -59,10 +59,10 @@ def test_one_weight_changed(specs, capsys):
     assert not d.inputs_added and not d.inputs_removed
     assert not d.results_added and not d.results_removed
     moves = {c.key: (c.old, c.new) for c in d.results_moved}
-    # derived: W = 132 + 128 + 88 = 348 kip -> 436 kip; V scales with W
-    assert moves["seismic.W"] == pytest.approx((348.0, 436.0), rel=1e-12)
+    # derived: W = 132 + 128 + 88 = 348 kip -> 496 kip; V scales with W
+    assert moves["seismic.W"] == pytest.approx((348.0, 496.0), rel=1e-12)
     v_old, v_new = moves["seismic.V"]
-    assert v_new / v_old == pytest.approx(436.0 / 348.0, rel=1e-12)
+    assert v_new / v_old == pytest.approx(496.0 / 348.0, rel=1e-12)
     # every moved result moved by what the engine gives for each spec on its own
     _, r0 = check_spec(old)
     _, r1 = check_spec(new)
@@ -73,15 +73,15 @@ def test_one_weight_changed(specs, capsys):
     assert not any(k.startswith("wind.") for k in moves)
     # the check that crossed 1.0, with its ratios before and after
     [crossed] = d.checks_crossed
-    assert crossed.check == "hold_down.L2.seis"
-    assert crossed.old_dcr == r0["summary.hold_down.L2.seis.dcr"] < 1.0
-    assert crossed.new_dcr == r1["summary.hold_down.L2.seis.dcr"] > 1.0
+    assert crossed.check == "wall.L2.seis"
+    assert crossed.old_dcr == r0["summary.wall.L2.seis.dcr"] < 1.0
+    assert crossed.new_dcr == r1["summary.wall.L2.seis.dcr"] > 1.0
     assert (crossed.old_status, crossed.new_status) == ("ok", "FAILS")
     assert main(["diff", str(old_path), str(new_path)]) == 1
     text = capsys.readouterr().out
-    assert f"inputs changed (1):\n    {WEIGHT_PATH}: 132.0 -> 220.0" in text
+    assert f"inputs changed (1):\n    {WEIGHT_PATH}: 132.0 -> 280.0" in text
     assert "checks crossing a DCR of 1.0 (1):" in text
-    assert "hold_down.L2.seis" in text and "now FAILS" in text
+    assert "wall.L2.seis" in text and "now FAILS" in text
     assert "relative tolerance of 1e-06" in text
 
 
@@ -98,20 +98,20 @@ def test_json_report(specs, capsys):
         "removed": [],
     }
     [crossed] = report["checks_crossed"]
-    assert crossed["check"] == "hold_down.L2.seis" and crossed["now"] == "fails"
+    assert crossed["check"] == "wall.L2.seis" and crossed["now"] == "fails"
     _, r1 = check_spec(new)
-    assert crossed["new_dcr"] == r1["summary.hold_down.L2.seis.dcr"]
+    assert crossed["new_dcr"] == r1["summary.wall.L2.seis.dcr"]
     w = next(m for m in report["results"]["moved"] if m["id"] == "seismic.W")
-    assert w["change"] == pytest.approx(88.0, rel=1e-12)
-    assert w["relative_change"] == pytest.approx(88.0 / 348.0, rel=1e-12)
+    assert w["change"] == pytest.approx(148.0, rel=1e-12)
+    assert w["relative_change"] == pytest.approx(148.0 / 348.0, rel=1e-12)
 
 
 def test_check_that_now_passes(tmp_path, capsys):
-    # stiffer walls for wind: the wind drift row of the demo (DCR 1.08) passes
-    old = _demo()
-    new = copy.deepcopy(old)
-    for assembly in new["assemblies"]["shear_walls"]:
-        assembly["Ga_wind_kips_per_in"] *= 1.2
+    # softer walls for wind (0.3 x Ga) fail the demo's wind drift row; the demo's own pass
+    new = _demo()
+    old = copy.deepcopy(new)
+    for assembly in old["assemblies"]["shear_walls"]:
+        assembly["Ga_wind_kips_per_in"] *= 0.3
     d = diff_sides(
         load_side(_write(old, tmp_path / "a.json")), load_side(_write(new, tmp_path / "b.json"))
     )
@@ -144,7 +144,7 @@ def test_workbook_edited_by_a_script(specs, built, tmp_path, capsys):
     wb.save(edited)
     d = diff_sides(load_side(specs[0]), load_side(edited))
     assert [(c.key, c.new) for c in d.inputs_changed] == [(WEIGHT_PATH, HEAVIER_KIP)]
-    assert [c.check for c in d.checks_crossed] == ["hold_down.L2.seis"]
+    assert [c.check for c in d.checks_crossed] == ["wall.L2.seis"]
     # the edited workbook holds the same inputs as the spec with that weight
     assert main(["diff", str(edited), str(new_path)]) == 0
     assert "no changes" in capsys.readouterr().out
