@@ -3,7 +3,7 @@
 
 Expected values are derived by hand from the rules named beside each check (statics and the
 clauses' own arithmetic); published inputs are the standards' coefficients (ASCE 7-16 Fig. 27.3-1,
-Table 26.13-1, Fig. 27.3-8, App. D, from memory and read in a later edition's transcription, see
+Table 26.13-1, Fig. 27.3-8, App. D, from memory and read in a later edition's copy, see
 tests/engine/test_asce7_16_wind_cases.py). The examples are invented buildings.
 """
 

@@ -1,10 +1,10 @@
 """ASCE 7-16 roof uplift, minimum load case and torsional load cases (ch. 26-27, App. D).
 
-Sources: Fig. 27.3-1 roof Cp and its note on interpolation, read from a transcription of the same
+Sources: Fig. 27.3-1 roof Cp and its note on interpolation, read from a copy of the same
 figure in ASCE/SEI 7-22 ch. 27 (values unchanged from ASCE 7-16: from memory); Table 26.13-1
 GCpi: enclosed and partially enclosed from memory, partially open ±0.18 read in a quotation of the
 ASCE 7-16 commentary C26.2; Fig. 27.3-8 case factors 0.75 / 0.563 and e = 0.15 B read from the
-same 7-22 transcription; Appendix D, D1.1 wording read in a copy of ASCE 7-10 (figure number
+same 7-22 copy; Appendix D, D1.1 wording read in a copy of ASCE 7-10 (figure number
 updated in 7-16, from memory); §27.1.5 16 psf / 8 psf from memory.
 """
 

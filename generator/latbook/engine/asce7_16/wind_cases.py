@@ -2,7 +2,7 @@
 the torsional cases of Fig. 27.3-8 (with the Appendix D exemption).
 
 Values of Fig. 27.3-1 (roof, wind normal to ridge with θ < 10° and parallel to ridge) and Table
-26.13-1 are typed from memory and were compared with a transcription of the same figure in a later
+26.13-1 are typed from memory and were compared with a copy of the same figure in a later
 edition (unchanged there); the tests name the source of each value.
 """
 
