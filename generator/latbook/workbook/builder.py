@@ -28,18 +28,41 @@ from latbook.workbook.context import build_context
 from latbook.workbook.cover import COVER_SHEET, write_cover
 from latbook.workbook.index_sheet import INDEX_SHEET, write_index
 from latbook.workbook.input_check import HELPER_CACHED, CellGroup, plan_input_check
-from latbook.workbook.layout import COL_CLAUSE, Cell, SheetPlan, plan_sheets
+from latbook.workbook.layout import LAST_GRID_COL, Cell, SheetPlan, plan_sheets
+from latbook.workbook.pagination import (
+    SheetPages,
+    greedy_pages,
+    paginate,
+    row_heights,
+    title_cells,
+)
+from latbook.workbook.print_grid import (
+    GRID_WIDTHS,
+    HEADER_FOOTER_MARGIN_IN,
+    MARGIN_BOTTOM_IN,
+    MARGIN_SIDE_IN,
+    MARGIN_TOP_IN,
+    ROW_MIN_PT,
+    WIDTH_SAFETY,
+    col_width_pt,
+    printable_width_pt,
+)
 from latbook.workbook.registry import Registry, a1
 from latbook.workbook.rendered import cell_formula
 from latbook.workbook.sheet_names import SPEC_SHEET
 from latbook.workbook.styles import Styles
+from latbook.workbook.tables_sheet import LAST_COL as TABLES_LAST_COL
 from latbook.workbook.tables_sheet import TABLES_SHEET, write_tables
 from latbook.workbook.templates import all_templates, reference_tables
 
 SPEC_CHUNK = 30000
 FIXED_TIMESTAMP = dt.datetime(2000, 1, 1, 0, 0, 0)
-SCALAR_WIDTHS = {0: 46, 1: 10, 2: 14, 3: 10, 4: 34}
-TABLE_WIDTH = 12
+# The footer's caution: short enough for a third of the page at 8 pt (the full caution is
+# on the Cover and under each sheet's title).
+FOOTER_CAUTION = "Engineer's review and seal required"
+HEADER_FOOTER_FONT = "&8"
+HEADER_TEXT_CHARS = 40
+CHART_WIDTH_PX = round(0.95 * sum(col_width_pt(w) for w in GRID_WIDTHS) / 0.75)
 # in_memory: assemble the parts in memory, not in one temp file per part (faster, and
 # nothing to clean up if a build is interrupted).
 WORKBOOK_OPTIONS = {"strings_to_formulas": False, "strings_to_urls": False, "in_memory": True}
@@ -120,16 +143,18 @@ def _write(spec, results, placed, registry, tmp, spec_json, spec_sha256, protect
     cover = wb.add_worksheet(COVER_SHEET)
     last = write_cover(cover, spec, spec_sha256, styles, results)
     _write_group(cover, groups[COVER_SHEET], registry, results, styles)
-    _finish_sheet(cover, header, last, 1, protect, landscape=False)
+    _fix_row_heights(cover, last)
+    _finish_sheet(cover, header, SheetPages(last_row=last), 1, protect)
+    if _cover_scale(cover) < 1.0:
+        cover.fit_to_pages(1, 0)  # cover.py's fixed columns are a little wider than the page
 
     sheets = {plan.name: wb.add_worksheet(plan.name) for plan in plans}
     for plan in plans:
-        _write_plan(sheets[plan.name], plan, registry, results, styles)
         ws = sheets[plan.name]
+        pages = plan_pages(plan, results)
+        _write_plan(ws, plan, pages, registry, results, styles)
         _write_charts(wb, ws, plan, registry)
-        for top, bottom in plan.header_rows[:1]:
-            ws.repeat_rows(top, bottom)
-        _finish_sheet(ws, header, plan.last_row, plan.last_col, protect, plan.template.landscape)
+        _finish_sheet(ws, header, pages, LAST_GRID_COL, protect)
 
     for name, qid in sorted(registry.names.items()):
         entry = registry.entries[qid]
@@ -137,7 +162,7 @@ def _write(spec, results, placed, registry, tmp, spec_json, spec_sha256, protect
 
     tables = wb.add_worksheet(TABLES_SHEET)
     last = write_tables(wb, tables, reference_tables(), styles)
-    _finish_sheet(tables, header, last, 7, protect, landscape=False)
+    _finish_sheet(tables, header, SheetPages(last_row=last), TABLES_LAST_COL, protect)
 
     index = wb.add_worksheet(INDEX_SHEET)
     last = write_index(index, registry, styles)
@@ -178,15 +203,62 @@ def _drop_open_archives(exc: BaseException) -> None:
             tb = tb.tb_next
 
 
-def _write_plan(ws: Worksheet, plan: SheetPlan, registry: Registry, results, styles) -> None:
-    for col, width in SCALAR_WIDTHS.items():
-        ws.set_column(col, col, max(width, plan.widths.get(col, 0)))
-    for col in range(len(SCALAR_WIDTHS), plan.last_col + 1):
-        ws.set_column(col, col, plan.widths.get(col, TABLE_WIDTH))
-    ws.write_string(0, 0, plan.title, styles.get("title"))
-    ws.write_string(1, 0, CAUTION_SHORT, styles.get("caution"))
+def plan_pages(plan: SheetPlan, results: Mapping[str, Any]) -> SheetPages:
+    """Row heights, page breaks and repeated rows of a calc sheet (pagination.py)."""
+    return paginate(plan, row_heights(plan, results, title_cells(plan, CAUTION_SHORT)))
+
+
+def page_counts(spec: Spec, results: Mapping[str, Any]) -> dict[str, int]:
+    """Printed pages of each printed sheet, in print order (Cover, calc sheets, Tables), as
+    the layout determines them; for a table of contents with page numbers."""
+    plans, registry = layout(spec)
+    counts: dict[str, int] = {}
+    scratch = xlsxwriter.Workbook(None, {"in_memory": True})
+    styles = Styles(scratch)
+    cover = scratch.add_worksheet(COVER_SHEET)
+    last = write_cover(cover, spec, "0" * 64, styles, results)
+    counts[COVER_SHEET] = _sheet_pages(cover, last, _cover_scale(cover))
+    for plan in plans:
+        if isinstance(plan, SheetPlan):
+            counts[plan.name] = plan_pages(plan, results).pages
+    tables = scratch.add_worksheet(TABLES_SHEET)
+    last = write_tables(scratch, tables, reference_tables(), styles)
+    counts[TABLES_SHEET] = _sheet_pages(tables, last)
+    return counts
+
+
+def _fix_row_heights(ws: Worksheet, last_row: int) -> None:
+    """Give every row a height of its own (the writer's, else one line), so that the pages
+    LibreOffice prints are the ones counted (_sheet_pages)."""
+    for r in range(last_row + 1):
+        if r not in ws.row_sizes:
+            ws.set_row(r, ROW_MIN_PT)
+
+
+def _sheet_pages(ws: Worksheet, last_row: int, scale: float = 1.0) -> int:
+    # xlsxwriter keeps row heights in pixels
+    heights = [
+        ws.row_sizes[r][0] * 0.75 if r in ws.row_sizes else ROW_MIN_PT for r in range(last_row + 1)
+    ]
+    return greedy_pages(h * scale for h in heights)
+
+
+def _cover_scale(ws: Worksheet) -> float:
+    """The print scale that fits the Cover's columns (widths set by cover.py) to the page."""
+    # xlsxwriter keeps widths in pixels (7 px per unit + 5)
+    width = sum(col_width_pt((info.width - 5) / 7) for info in ws.col_info.values())
+    return min(1.0, printable_width_pt() * WIDTH_SAFETY / width) if width else 1.0
+
+
+def _write_plan(
+    ws: Worksheet, plan: SheetPlan, pages: SheetPages, registry: Registry, results, styles
+) -> None:
+    for col, width in enumerate(GRID_WIDTHS):
+        ws.set_column(col, col, width)
+    for row, height in pages.heights.items():
+        ws.set_row(row, height)
     tables = registry.tables
-    for cell in plan.cells:
+    for cell in [*title_cells(plan, CAUTION_SHORT), *plan.cells]:
         _write_cell(ws, plan.name, cell, registry, tables, results, styles)
 
 
@@ -230,12 +302,14 @@ def _write_charts(wb, ws: Worksheet, plan: SheetPlan, registry: Registry) -> Non
         chart.set_x_axis({"name": spec["x_title"]})
         chart.set_y_axis({"name": spec["y_title"], "major_gridlines": {"visible": True}})
         chart.set_legend({"position": "bottom"})
-        chart.set_size({"width": 720, "height": 20 * spec["rows"]})
+        chart.set_size({"width": CHART_WIDTH_PX, "height": 20 * spec["rows"]})
         ws.insert_chart(spec["row"], 0, chart, {"object_position": 1})
 
 
 def _write_cell(ws, sheet, cell: Cell, registry, tables, results, styles) -> None:
     fmt = styles.get(cell.style, cell.fmt)
+    if cell.span > 1:  # merged first, then the content goes into its first cell
+        ws.merge_range(cell.row, cell.col, cell.row, cell.col + cell.span - 1, "", fmt)
     if cell.formula is not None:
         formula = cell_formula(cell, sheet, registry)
         value = _cached(results[cell.qid])
@@ -298,29 +372,40 @@ def data_validation(limits: FieldLimits, address: str) -> dict[str, Any] | None:
 
 
 def _page_header(spec: Spec) -> tuple[str, str]:
+    """Page header and footer: 8 pt, each part short enough for its third of the page (the
+    project name is cut at HEADER_TEXT_CHARS here only; the Cover holds it in full)."""
     p = spec.project
     esc = _escape_header
-    head = f"&L{esc(p.name)} {esc(p.number)}&C&A&RRev {esc(p.revision)}  {esc(p.date)}"
-    foot = "&Llatbook " + __version__ + "&CPage &P of &N&R" + esc(CAUTION_SHORT[:60]) + "..."
+    f = HEADER_FOOTER_FONT
+    project = esc(f"{p.name} {p.number}")
+    head = f"&L{f}{project}&C{f}&A&R{f}Rev {esc(p.revision)}  {esc(p.date)}"
+    foot = f"&L{f}latbook {__version__}&C{f}Page &P of &N&R{f}{esc(FOOTER_CAUTION)}"
     return head, foot
 
 
 def _escape_header(text: str) -> str:
-    return text.replace("&", "&&")[:60]
+    if len(text) > HEADER_TEXT_CHARS:
+        text = text[: HEADER_TEXT_CHARS - 1].rstrip() + "…"
+    return text.replace("&", "&&")
 
 
-def _finish_sheet(ws, header, last_row, last_col, protect, landscape) -> None:
+def _finish_sheet(ws, header, pages: SheetPages, last_col: int, protect: bool) -> None:
+    """Print setup: US letter landscape at 100 %, the sheet's page breaks and repeated
+    header rows (pagination.py), page header and footer."""
     head, foot = header
-    ws.set_header(head)
-    ws.set_footer(foot)
-    if landscape:
-        ws.set_landscape()
-    else:
-        ws.set_portrait()
+    ws.set_header(head, {"margin": HEADER_FOOTER_MARGIN_IN})
+    ws.set_footer(foot, {"margin": HEADER_FOOTER_MARGIN_IN})
+    ws.set_landscape()
     ws.set_paper(1)  # US Letter
-    ws.fit_to_pages(1, 0)
-    ws.print_area(0, 0, max(last_row, 1), max(last_col, COL_CLAUSE))
-    ws.set_margins(left=0.5, right=0.5, top=0.75, bottom=0.75)
+    ws.set_print_scale(100)
+    ws.print_area(0, 0, max(pages.last_row, 1), last_col)
+    if pages.breaks:
+        ws.set_h_pagebreaks(pages.breaks)
+    if pages.repeat is not None:
+        ws.repeat_rows(*pages.repeat)
+    ws.set_margins(
+        left=MARGIN_SIDE_IN, right=MARGIN_SIDE_IN, top=MARGIN_TOP_IN, bottom=MARGIN_BOTTOM_IN
+    )
     if protect:
         ws.protect(
             "",

@@ -57,14 +57,17 @@ def render(
     table: TablePos | None = None,
     row: int | None = None,
 ) -> str:
-    """The Excel formula for one cell of `sheet` (row `row` of `table`, if any)."""
+    """The Excel formula for one cell of `sheet` (row `row` of `table`, if any; a table's
+    row is counted in its first column chunk, see TablePos.offsets)."""
     text = substitute_ctx(pattern, ctx)
 
     def ref(table_pos: TablePos, r: int, field: str) -> str:
-        return _qualify(table_pos.sheet, sheet, a1(r, _col(table_pos, field)))
+        c = _col(table_pos, field)
+        return _qualify(table_pos.sheet, sheet, a1(table_pos.row_of(field, r), c))
 
     def span(table_pos: TablePos, r0: int, r1: int, field: str) -> str:
         c = _col(table_pos, field)
+        r0, r1 = table_pos.row_of(field, r0), table_pos.row_of(field, r1)
         return _qualify(table_pos.sheet, sheet, f"{a1(r0, c, True)}:{a1(r1, c, True)}")
 
     def lookup(spec: str) -> tuple[TablePos, str, str | None]:

@@ -5,7 +5,9 @@ row per column, its id pattern (e.g. `seismic.level.<level>.Fx`) and cell range.
 one row per table, its first sheet row and, row after row, the values of the patterns'
 `<fields>` ("level=L2;line=A|level=L2;line=B|..." continued in the next cells when long). To
 find an id in a table, match it to a pattern, read the field values, find the row with those
-values and take the column of the range. `locate_in_index` does exactly that.
+values and take the column of the range; a table printed in column chunks holds a column's
+range lower down, so the row moves down by as much as the range's first row lies below the
+table's. `locate_in_index` does exactly that.
 """
 
 from __future__ import annotations
@@ -51,15 +53,16 @@ def write_index(ws: Worksheet, registry: Registry, styles: Styles) -> int:
     first_in_column = {}
     for e in registry.entries.values():
         if e.table is not None:
-            first_in_column.setdefault((e.table, e.col), e)
+            first_in_column.setdefault((e.table, e.row, e.col), e)
     columns = []
     for t in registry.tables.values():
         for fld, pattern in t.patterns.items():
             c = t.cols[fld]
-            first = first_in_column.get((t.name, c))
+            top, bottom = t.row_of(fld, t.first_row), t.row_of(fld, t.last_row)
+            first = first_in_column.get((t.name, top, c))
             if first is None:
                 continue
-            cells = f"{t.sheet}!{a1(t.first_row, c)}:{a1(t.last_row, c)}"
+            cells = f"{t.sheet}!{a1(top, c)}:{a1(bottom, c)}"
             label = first.label.split(" [")[0]
             columns.append((pattern, first.kind, cells, t.name, label, first.unit, first.clause))
     row = _part(ws, row + 1, 1, COLUMN_HEADERS, styles, columns)
@@ -106,10 +109,15 @@ def locate_in_index(path: Path, qid: str) -> str | None:
         match = regex.fullmatch(qid)
         if not match:
             continue
-        sheet_row = rows.get((table, _binding(match.groupdict().items())))
-        if sheet_row is not None:
+        found = rows.get((table, _binding(match.groupdict().items())))
+        if found is not None:
+            # The column's range may sit in a later column chunk, below the table's first
+            # data row: shift by the distance between the two.
+            table_row, first_row = found
             sheet, rng = cells.split("!")
-            return f"{sheet}!{re.sub(r'[0-9]+', '', rng.split(':')[0])}{sheet_row}"
+            top = rng.split(":")[0]
+            shift = int(re.sub(r"[^0-9]", "", top)) - first_row
+            return f"{sheet}!{re.sub(r'[0-9]+', '', top)}{table_row + shift}"
     return None
 
 
@@ -134,7 +142,7 @@ def _read_index(path: str, _mtime_ns: int):
             text = "".join(v for v in values[2:] if v)
             for i, row_text in enumerate(text.split(ROW_SEP)):
                 pairs = (item.split("=", 1) for item in row_text.split(FIELD_SEP) if item)
-                rows[(first, _binding(pairs))] = int(values[1]) + i
+                rows[(first, _binding(pairs))] = (int(values[1]) + i, int(values[1]))
     return scalars, columns, rows
 
 

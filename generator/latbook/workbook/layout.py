@@ -12,11 +12,17 @@ from typing import Any
 from latbook.spec.limits import FieldLimits, field_limits
 from latbook.workbook.context import Context
 from latbook.workbook.formula import ctx_fields, substitute_ctx
+from latbook.workbook.print_grid import GRID_COLS
 from latbook.workbook.registry import Entry, Registry, TablePos
+from latbook.workbook.table_chunks import ChunkColumn, chunk_columns
 from latbook.workbook.templates import Block, Column, Row, SheetTemplate
 
-# Scalar blocks: description | symbol | value | unit | clause
-COL_LABEL, COL_SYMBOL, COL_VALUE, COL_UNIT, COL_CLAUSE = range(5)
+# Scalar blocks: description | symbol | value | unit | equation with values | clause.
+# The equation and the clause span several grid columns (print_grid.GRID_WIDTHS).
+COL_LABEL, COL_SYMBOL, COL_VALUE, COL_UNIT, COL_EQUATION = range(5)
+COL_CLAUSE = 7
+SCALAR_SPANS = {COL_EQUATION: COL_CLAUSE - COL_EQUATION, COL_CLAUSE: GRID_COLS - COL_CLAUSE}
+LAST_GRID_COL = GRID_COLS - 1
 FIRST_BLOCK_ROW = 3  # rows 0-2: sheet title, caution line, blank
 
 
@@ -35,6 +41,20 @@ class Cell:
     table: str | None = None
     fmt: str | None = None
     limits: FieldLimits | None = None  # an input's allowed range or values
+    span: int = 1  # grid columns the cell covers (merged when > 1)
+    table_row: int | None = None  # a table cell: its row in the table's first column chunk
+
+
+@dataclass(frozen=True)
+class PrintBlock:
+    """Rows printed together (a heading with its scalars, one column chunk of a table, a
+    note, a chart): kept on one page when they fit. `header` is a table chunk's header
+    rows (first, last), repeated on the pages it continues onto if it is the sheet's
+    repeat range (pagination.py)."""
+
+    first_row: int
+    last_row: int
+    header: tuple[int, int] | None = None
 
 
 @dataclass
@@ -44,11 +64,11 @@ class SheetPlan:
     template: SheetTemplate
     ctx: dict[str, Any]
     cells: list[Cell] = field(default_factory=list)
-    widths: dict[int, float] = field(default_factory=dict)
     header_rows: list[tuple[int, int]] = field(default_factory=list)
     charts: list[dict[str, Any]] = field(default_factory=list)
+    blocks: list[PrintBlock] = field(default_factory=list)
     last_row: int = 0
-    last_col: int = COL_CLAUSE
+    last_col: int = LAST_GRID_COL
 
 
 def plan_sheets(
@@ -63,8 +83,6 @@ def plan_sheets(
         for sheet_ctx in instances:
             name = substitute_ctx(tpl.name, sheet_ctx)
             plan = SheetPlan(name, substitute_ctx(tpl.title, sheet_ctx), tpl, dict(sheet_ctx))
-            if tpl.value_width:
-                plan.widths[COL_VALUE] = tpl.value_width
             _place_blocks(plan, context, registry)
             plans.append(plan)
     return plans
@@ -77,6 +95,7 @@ def _place_blocks(plan: SheetPlan, context: Context, registry: Registry) -> None
             continue
         if block.skip_empty and not context.collections[substitute_ctx(block.over or "", plan.ctx)]:
             continue
+        start = row
         if block.kind == "scalars":
             row = _place_scalars(plan, block, context, registry, row)
         elif block.kind == "table":
@@ -87,6 +106,8 @@ def _place_blocks(plan: SheetPlan, context: Context, registry: Registry) -> None
             row = _place_chart(plan, block, context, row)
         else:
             raise ValueError(f"{plan.template.source}: unknown block kind '{block.kind}'")
+        if block.kind != "table" and row > start:
+            plan.blocks.append(PrintBlock(start, row - 1))
         row += 1
     plan.last_row = row
 
@@ -131,19 +152,24 @@ def _place_chart(plan: SheetPlan, block: Block, context: Context, row: int) -> i
 
 def _place_note(plan: SheetPlan, block: Block, row: int) -> int:
     if block.title:
-        plan.cells.append(Cell(row, 0, "heading", text=block.title))
+        plan.cells.append(_heading(row, block.title))
         row += 1
     for line in substitute_ctx(block.text, plan.ctx).strip().splitlines():
-        plan.cells.append(Cell(row, 0, "note", text=line.strip()))
+        plan.cells.append(Cell(row, 0, "note", text=line.strip(), span=GRID_COLS))
         row += 1
     return row
+
+
+def _heading(row: int, title: str) -> Cell:
+    """A block's title across the whole grid (wrapped when long)."""
+    return Cell(row, 0, "heading", text=title, span=GRID_COLS)
 
 
 def _place_scalars(
     plan: SheetPlan, block: Block, context: Context, registry: Registry, row: int
 ) -> int:
     if block.title:
-        plan.cells.append(Cell(row, 0, "heading", text=substitute_ctx(block.title, plan.ctx)))
+        plan.cells.append(_heading(row, substitute_ctx(block.title, plan.ctx)))
         row += 1
     for spec_row in block.rows:
         if not context.holds(spec_row.when):
@@ -162,7 +188,14 @@ def _place_scalar_row(
         Cell(row, COL_LABEL, "label_key" if r.key else "label", text=label),
         Cell(row, COL_SYMBOL, "symbol", text=r.symbol),
         Cell(row, COL_UNIT, "unit", text=r.unit),
-        Cell(row, COL_CLAUSE, "clause", text=substitute_ctx(r.clause, ctx)),
+        Cell(row, COL_EQUATION, "equation", text="", span=SCALAR_SPANS[COL_EQUATION]),
+        Cell(
+            row,
+            COL_CLAUSE,
+            "clause",
+            text=substitute_ctx(r.clause, ctx),
+            span=SCALAR_SPANS[COL_CLAUSE],
+        ),
     ]
     qid = substitute_ctx(r.id, ctx) if r.id else None
     name = substitute_ctx(r.name, ctx) if r.name else None
@@ -186,36 +219,75 @@ def _place_scalar_row(
 def _place_table(
     plan: SheetPlan, block: Block, context: Context, registry: Registry, row: int
 ) -> int:
+    """Lay out a table as stacked column chunks that fit the print grid (table_chunks.py):
+    chunk k holds its columns for every data row; chunks after the first repeat the key
+    column. The registry maps each field to its column and its chunk's row offset."""
     columns = [c for c in block.columns if context.holds(c.when)]
     rows = context.collections[substitute_ctx(block.over or "", plan.ctx)]
-    if block.title:
-        plan.cells.append(Cell(row, 0, "heading", text=substitute_ctx(block.title, plan.ctx)))
-        row += 1
-    header_top = row
-    for c, col in enumerate(columns):
-        plan.cells += [
-            Cell(row, c, "th", text=col.header),
-            Cell(row + 1, c, "th_unit", text=col.unit),
-            Cell(row + 2, c, "th_clause", text=substitute_ctx(col.clause, plan.ctx)),
-        ]
-        if col.width:
-            plan.widths[c] = max(plan.widths.get(c, 0), col.width)
-    plan.header_rows.append((header_top, header_top + 2))
-    plan.last_col = max(plan.last_col, len(columns) - 1)
-    first = row + 3
+    chunks = chunk_columns([c.width for c in columns])
+    title = substitute_ctx(block.title, plan.ctx) if block.title else ""
     name = substitute_ctx(block.table or "", plan.ctx)
-    tpos = TablePos(name=name, sheet=plan.name, key=block.key or "key", first_row=first)
-    tpos.cols = {col.field: c for c, col in enumerate(columns)}
+    tpos = TablePos(name=name, sheet=plan.name, key=block.key or "key", first_row=0)
     tpos.patterns = {col.field: col.id for col in columns if col.id}
     used = sorted({f for pattern in tpos.patterns.values() for f in ctx_fields(pattern)})
-    for i, row_ctx in enumerate(rows):
-        merged = {**plan.ctx, **row_ctx, "row_index": i}
-        tpos.rows[str(merged[tpos.key])] = first + i
-        tpos.bindings[str(merged[tpos.key])] = {f: str(merged[f]) for f in used}
-        for c, col in enumerate(columns):
-            plan.cells.append(_table_cell(plan, col, merged, name, first + i, c, context, registry))
+    contexts = [{**plan.ctx, **row_ctx, "row_index": i} for i, row_ctx in enumerate(rows)]
+    first_rows: list[int] = []
+    for k, chunk in enumerate(chunks):
+        start = row
+        if title:
+            part = f" (part {k + 1} of {len(chunks)})" if len(chunks) > 1 else ""
+            plan.cells.append(_heading(row, title + part))
+            row += 1
+        placed = chunk if k == 0 else [ChunkColumn(0, 0, 1), *chunk]
+        for pc in placed:
+            col = columns[pc.index]
+            plan.cells += [
+                Cell(row, pc.grid_col, "th", text=col.header, span=pc.span),
+                Cell(row + 1, pc.grid_col, "th_unit", text=col.unit, span=pc.span),
+                Cell(
+                    row + 2,
+                    pc.grid_col,
+                    "th_clause",
+                    text=substitute_ctx(col.clause, plan.ctx),
+                    span=pc.span,
+                ),
+            ]
+        plan.header_rows.append((row, row + 2))
+        first = row + 3
+        first_rows.append(first)
+        for pc in chunk:
+            tpos.cols[columns[pc.index].field] = pc.grid_col
+            tpos.offsets[columns[pc.index].field] = first - first_rows[0]
+        row = first + len(rows)
+        plan.blocks.append(PrintBlock(start, max(row - 1, first - 1), (first - 3, first - 1)))
+        if k + 1 < len(chunks):
+            row += 1
+    tpos.first_row = first_rows[0] if first_rows else row
+    for i, merged in enumerate(contexts):
+        key = str(merged[tpos.key])
+        tpos.rows[key] = tpos.first_row + i
+        tpos.bindings[key] = {f: str(merged[f]) for f in used}
+    for k, chunk in enumerate(chunks):
+        first = first_rows[k]
+        for i, merged in enumerate(contexts):
+            if k > 0:
+                plan.cells.append(_key_copy(columns[0], merged, first + i, tpos.key))
+            for pc in chunk:
+                cell = _table_cell(
+                    plan, columns[pc.index], merged, name, first + i, pc.grid_col, context, registry
+                )
+                cell.span = pc.span
+                cell.table_row = tpos.first_row + i
+                plan.cells.append(cell)
     registry.add_table(tpos)
-    return first + len(rows)
+    return row
+
+
+def _key_copy(key_column: Column, ctx: dict[str, Any], row: int, key: str) -> Cell:
+    """The key column repeated in a later chunk, as text: the key column's text (a level,
+    line or segment id), else the row's key."""
+    text = substitute_ctx(key_column.text, ctx) if key_column.text is not None else ctx[key]
+    return Cell(row, 0, "text", text=str(text))
 
 
 def _table_cell(

@@ -40,7 +40,11 @@ class Entry:
 
 @dataclass
 class TablePos:
-    """A laid-out table: data rows by key, columns by field."""
+    """A laid-out table: data rows by key, columns by field.
+
+    A table printed in column chunks (layout.py) holds each field's column in the rows of
+    its chunk: `rows` are the first chunk's rows and `offsets[field]` is added for the
+    field's chunk (0 in the first)."""
 
     name: str
     sheet: str
@@ -50,10 +54,19 @@ class TablePos:
     cols: dict[str, int] = field(default_factory=dict)
     patterns: dict[str, str] = field(default_factory=dict)  # field -> quantity id pattern
     bindings: dict[str, dict[str, str]] = field(default_factory=dict)  # key -> ctx used by ids
+    offsets: dict[str, int] = field(default_factory=dict)  # field -> rows below the first chunk
 
     @property
     def last_row(self) -> int:
         return self.first_row + len(self.rows) - 1
+
+    def row_of(self, field_name: str, row: int) -> int:
+        """Sheet row of `field_name` in the table row whose first-chunk row is `row`."""
+        return row + self.offsets.get(field_name, 0)
+
+    def cell(self, key: str, field_name: str) -> tuple[int, int]:
+        """(row, col) of `field_name` in the row keyed `key`."""
+        return self.row_of(field_name, self.rows[key]), self.cols[field_name]
 
 
 @dataclass

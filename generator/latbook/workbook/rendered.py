@@ -27,7 +27,7 @@ def cell_formula(cell: Cell, sheet: str, registry: Registry) -> str:
         sheet=sheet,
         ctx=cell.ctx,
         table=registry.tables.get(cell.table) if cell.table else None,
-        row=cell.row,
+        row=cell.row if cell.table_row is None else cell.table_row,
     )
 
 

@@ -78,8 +78,8 @@ class SheetTemplate:
     source: str
     when: str | None = None
     repeat: str | None = None
-    landscape: bool = False
-    value_width: float | None = None  # width of the value column (long text results)
+    landscape: bool = False  # read for archived templates; every calc sheet prints landscape
+    value_width: float | None = None  # unused: the print grid fixes widths; long text wraps
     blocks: tuple[Block, ...] = field(default_factory=tuple)
 
 

@@ -1,0 +1,98 @@
+"""The printout is the calc package: each example's LibreOffice PDF at US letter is legible
+on every page, prints each sheet on the pages the layout counts, and shows long labels and
+the footer's caution in full.
+
+References: LibreOffice Calc (headless PDF export) and poppler's `pdftotext -bbox`, both
+independent of latbook; a word's printed height is its box's yMax - yMin. The limits
+(no word under 7 pt, a median of 8 pt or more per page) are the project's legibility rule
+(common practice for calc packages read on paper).
+"""
+
+from __future__ import annotations
+
+import json
+import re
+import statistics
+from collections import Counter
+from pathlib import Path
+
+import pytest
+
+from latbook.build import build_workbook, check_spec
+from latbook.recalc import find_soffice
+from latbook.workbook.builder import FOOTER_CAUTION, layout, page_counts
+from latbook.workbook.layout import SheetPlan
+from tests.helpers.printout import page_sheet, print_pdf, read_pages
+
+pytestmark = [
+    pytest.mark.libreoffice,
+    pytest.mark.skipif(find_soffice() is None, reason="LibreOffice (soffice) is not installed"),
+]
+
+EXAMPLES = sorted(Path(__file__).resolve().parents[1].glob("out_examples/*/spec.json"))
+MIN_WORD_PT = 7.0
+MIN_MEDIAN_PT = 8.0
+
+
+@pytest.fixture(scope="module", params=[p.parent.name for p in EXAMPLES], ids=str)
+def printed(request, tmp_path_factory):
+    """(spec, engine results, the PDF's pages) of one example, converted once."""
+    data = json.loads(
+        (
+            Path(__file__).resolve().parents[1] / "out_examples" / request.param / "spec.json"
+        ).read_text(encoding="utf-8")
+    )
+    out = tmp_path_factory.mktemp(request.param)
+    build_workbook(data, out / "calc.xlsx")
+    spec, results = check_spec(data)
+    return spec, results, read_pages(print_pdf(out / "calc.xlsx", out / "pdf"))
+
+
+def test_every_page_is_legible(printed):
+    _, _, pages = printed
+    small = []
+    for n, page in enumerate(pages, start=1):
+        heights = [h for h, _ in page.words]
+        assert heights, f"page {n} is empty"
+        assert (page.width_pt, page.height_pt) == (792.0, 612.0), n  # letter, landscape
+        if min(heights) < MIN_WORD_PT or statistics.median(heights) < MIN_MEDIAN_PT:
+            small.append((n, min(heights), statistics.median(heights)))
+    assert not small, small[:10]
+
+
+def test_each_sheet_prints_on_the_pages_the_layout_counts(printed):
+    spec, results, pages = printed
+    expected = page_counts(spec, results)
+    found = Counter(page_sheet(page, list(expected)) for page in pages)
+    assert None not in found, "a page without a sheet name in its header"
+    assert dict(found) == expected
+    assert list(dict.fromkeys(page_sheet(p, list(expected)) for p in pages)) == list(expected)
+
+
+def test_long_labels_and_the_footer_print_in_full(printed):
+    """The words of each sheet's longest labels and headers are all on that sheet's pages
+    (a clipped cell loses its last words; words are compared split at hyphens, where a
+    wrapped line may break); every page carries the footer's caution."""
+    spec, _, pages = printed
+    plans, _ = layout(spec)
+    names = [p.name for p in plans if isinstance(p, SheetPlan)]
+    words_by_sheet: dict[str, Counter] = {}
+    for page in pages:
+        sheet = page_sheet(page, [*names, "Cover", "Tables"])
+        words_by_sheet.setdefault(sheet, Counter()).update(_tokens(page.text))
+        assert FOOTER_CAUTION in page.text, "footer caution cut"
+    for plan in plans:
+        if not isinstance(plan, SheetPlan):
+            continue
+        texts = sorted(
+            {c.text for c in plan.cells if c.text and c.style in ("label", "th", "label_key")},
+            key=len,
+        )[-5:]
+        printed_words = words_by_sheet[plan.name]
+        for text in texts:
+            missing = Counter(_tokens(text)) - printed_words
+            assert not missing, (plan.name, text, missing)
+
+
+def _tokens(text: str) -> list[str]:
+    return [t for t in re.split(r"[\s-]+", text) if t]
