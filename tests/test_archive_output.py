@@ -19,10 +19,10 @@ import pytest
 from xlsxwriter.utility import xl_col_to_name
 
 from latbook import __version__
-from latbook.build import build_workbook, spec_digest
+from latbook.build import build_workbook, check_spec, spec_digest
 from latbook.cli import main
 from latbook.recalc import convert_to_pdf, pdf_page_count
-from latbook.workbook.builder import SPEC_SHEET
+from latbook.workbook.builder import SPEC_SHEET, page_counts
 
 DEMO = Path(__file__).resolve().parents[1] / "out_examples/maple_terrace/spec.json"
 
@@ -152,8 +152,8 @@ def test_pdf_printout_holds_every_sheet(demo, book, soffice, pdftotext, tmp_path
     pdf = convert_to_pdf(demo.path, tmp_path)
     sheets = _printed_sheets(book)
     pages = pdf_page_count(pdf)
-    # sane: at least a page per sheet, and no runaway (fit to width keeps tables narrow)
-    assert len(sheets) <= pages <= 4 * len(sheets) + 10
+    # every sheet prints at 100 %, on the pages the layout counts (builder.page_counts)
+    assert pages == sum(page_counts(*check_spec(_demo_data())).values())
     text = subprocess.run(
         [pdftotext, "-layout", str(pdf), "-"], capture_output=True, text=True, check=True
     ).stdout
