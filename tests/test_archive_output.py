@@ -118,7 +118,8 @@ def _chart_value_refs(path: Path) -> set[str]:
 def _column_range(demo, table: str, field: str) -> str:
     t = demo.registry.tables[table]
     col = xl_col_to_name(t.cols[field])
-    return f"{t.sheet}!${col}${t.first_row + 1}:${col}${t.last_row + 1}"
+    top, bottom = t.row_of(field, t.first_row) + 1, t.row_of(field, t.last_row) + 1
+    return f"{t.sheet}!${col}${top}:${col}${bottom}"
 
 
 CHARTED = {"elf": ("Fx", "Vx"), "wind_x": ("F_level", "V_story"), "wind_y": ("F_level", "V_story")}
@@ -132,7 +133,21 @@ def test_story_force_and_shear_charts_read_the_formula_cells(demo):
     for table, fields in CHARTED.items():
         t = demo.registry.tables[table]
         for field in fields:
-            assert {kind[(t.sheet, r, t.cols[field])] for r in t.rows.values()} == {"calc"}
+            assert {kind[(t.sheet, *t.cell(key, field))] for key in t.rows} == {"calc"}
+
+
+def test_every_chart_series_reads_registered_formula_cells(demo):
+    """Charts of fields printed in a later column chunk read that chunk's rows."""
+    kind = {(e.sheet, e.row, e.col): e.kind for e in demo.registry.entries.values()}
+    refs = _chart_value_refs(demo.path)
+    assert refs
+    for ref in refs:
+        sheet, rng = ref.replace("'", "").split("!")
+        for cell in rng.replace("$", "").split(":"):
+            letters = "".join(ch for ch in cell if ch.isalpha())
+            row = int(cell[len(letters) :]) - 1
+            col = openpyxl.utils.column_index_from_string(letters) - 1
+            assert kind.get((sheet, row, col)) == "calc", ref
 
 
 @pytest.fixture(scope="session")

@@ -228,10 +228,11 @@ def test_chord_edges_are_named_and_charts_drawn(built):
     for d in ("x", "y"):
         tpos = result.registry.tables[f"spans_{level}_{d}"]
         ws = wb[tpos.sheet]
-        for row in tpos.rows.values():
-            kind = ws.cell(row + 1, tpos.cols["kind"] + 1).value
-            tension = ws.cell(row + 1, tpos.cols["T_edge"] + 1).value
-            compression = ws.cell(row + 1, tpos.cols["C_edge"] + 1).value
+        for key in tpos.rows:
+            kind, tension, compression = (
+                ws.cell(r + 1, c + 1).value
+                for r, c in (tpos.cell(key, f) for f in ("kind", "T_edge", "C_edge"))
+            )
             expected = (f"{d}_max edge", f"{d}_min edge")
             if kind == "cantilever":
                 expected = expected[::-1]

@@ -288,13 +288,19 @@ def _write_charts(wb, ws: Worksheet, plan: SheetPlan, registry: Registry) -> Non
             kind["subtype"] = spec["subtype"]
         chart = wb.add_chart(kind)
         x_col = tpos.cols[spec["x"]]
+        x_rows = (tpos.row_of(spec["x"], tpos.first_row), tpos.row_of(spec["x"], tpos.last_row))
         for series in spec["series"]:
-            col = tpos.cols[series["field"]]
+            field_name = series["field"]
+            col = tpos.cols[field_name]
+            top, bottom = (
+                tpos.row_of(field_name, tpos.first_row),
+                tpos.row_of(field_name, tpos.last_row),
+            )
             chart.add_series(
                 {
                     "name": series["name"],
-                    "categories": [tpos.sheet, tpos.first_row, x_col, tpos.last_row, x_col],
-                    "values": [tpos.sheet, tpos.first_row, col, tpos.last_row, col],
+                    "categories": [tpos.sheet, x_rows[0], x_col, x_rows[1], x_col],
+                    "values": [tpos.sheet, top, col, bottom, col],
                 }
             )
         if spec["title"]:
