@@ -6,6 +6,7 @@ cached values come from the engine's results, keyed by quantity id.
 
 from __future__ import annotations
 
+import collections
 import contextlib
 import datetime as dt
 import gc
@@ -26,6 +27,8 @@ from latbook.spec.models import Spec
 from latbook.workbook.cautions import CAUTION_SHORT
 from latbook.workbook.context import build_context
 from latbook.workbook.cover import COVER_SHEET, write_cover
+from latbook.workbook.equation_layout import place_equations
+from latbook.workbook.equation_text import cached_text
 from latbook.workbook.index_sheet import INDEX_SHEET, write_index
 from latbook.workbook.input_check import HELPER_CACHED, CellGroup, plan_input_check
 from latbook.workbook.layout import COL_CLAUSE, Cell, SheetPlan, plan_sheets
@@ -38,7 +41,7 @@ from latbook.workbook.templates import all_templates, reference_tables
 
 SPEC_CHUNK = 30000
 FIXED_TIMESTAMP = dt.datetime(2000, 1, 1, 0, 0, 0)
-SCALAR_WIDTHS = {0: 46, 1: 10, 2: 14, 3: 10, 4: 34}
+SCALAR_WIDTHS = {0: 46, 1: 10, 2: 14, 3: 10, 4: 44, 5: 34}
 TABLE_WIDTH = 12
 # in_memory: assemble the parts in memory, not in one temp file per part (faster, and
 # nothing to clean up if a build is interrupted).
@@ -57,6 +60,7 @@ def layout(spec: Spec) -> tuple[list[SheetPlan | CellGroup], Registry]:
     check), and the registry, without writing anything."""
     registry = Registry()
     plans = plan_sheets(all_templates(), build_context(spec), registry)
+    place_equations(plans, registry)
     return [*plans, *plan_input_check(plans, registry)], registry
 
 
@@ -123,8 +127,10 @@ def _write(spec, results, placed, registry, tmp, spec_json, spec_sha256, protect
     _finish_sheet(cover, header, last, 1, protect, landscape=False)
 
     sheets = {plan.name: wb.add_worksheet(plan.name) for plan in plans}
+    inputs = {c.qid: c.value for p in plans for c in p.cells if c.style == "input" and c.qid}
+    values = collections.ChainMap(dict(results), inputs)  # what the equations print
     for plan in plans:
-        _write_plan(sheets[plan.name], plan, registry, results, styles)
+        _write_plan(sheets[plan.name], plan, registry, values, styles)
         ws = sheets[plan.name]
         _write_charts(wb, ws, plan, registry)
         for top, bottom in plan.header_rows[:1]:
@@ -238,7 +244,10 @@ def _write_cell(ws, sheet, cell: Cell, registry, tables, results, styles) -> Non
     fmt = styles.get(cell.style, cell.fmt)
     if cell.formula is not None:
         formula = cell_formula(cell, sheet, registry)
-        value = _cached(results[cell.qid])
+        if cell.parts is not None:  # a printed equation: text from the engine's values
+            value = cached_text(cell.parts, lambda qid: _value_of(qid, results))
+        else:
+            value = _cached(results[cell.qid])
         if isinstance(value, str) and cell.style in TEXT_RESULT_STYLES:
             fmt = styles.get(TEXT_RESULT_STYLES[cell.style], cell.fmt)  # text reads from the left
         ws.write_formula(cell.row, cell.col, formula, fmt, value)
@@ -246,6 +255,13 @@ def _write_cell(ws, sheet, cell: Cell, registry, tables, results, styles) -> Non
         _write_input(ws, cell, fmt)
     elif cell.text is not None:
         ws.write_string(cell.row, cell.col, cell.text, fmt)
+
+
+def _value_of(qid: str, results) -> Any:
+    """A quantity's value: the engine's, or an input's value as built."""
+    if qid in results:
+        return results[qid]
+    raise BuildError(f"an equation prints '{qid}', which has no engine value")
 
 
 def _cached(value: Any) -> Any:

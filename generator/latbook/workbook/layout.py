@@ -11,13 +11,14 @@ from typing import Any
 
 from latbook.spec.limits import FieldLimits, field_limits
 from latbook.workbook.context import Context
-from latbook.workbook.formula import ctx_fields, substitute_ctx
+from latbook.workbook.formula import TemplateError, ctx_fields, substitute_ctx
 from latbook.workbook.registry import Entry, Registry, TablePos
 from latbook.workbook.templates import Block, Column, Row, SheetTemplate
 
-# Scalar blocks: description | symbol | value | unit | clause
-COL_LABEL, COL_SYMBOL, COL_VALUE, COL_UNIT, COL_CLAUSE = range(5)
+# Scalar blocks: description | symbol | value | unit | equation | clause
+COL_LABEL, COL_SYMBOL, COL_VALUE, COL_UNIT, COL_EQUATION, COL_CLAUSE = range(6)
 FIRST_BLOCK_ROW = 3  # rows 0-2: sheet title, caution line, blank
+TABLE_HEADER_ROWS = 4  # header, unit, clause, equation
 
 
 @dataclass
@@ -35,6 +36,9 @@ class Cell:
     table: str | None = None
     fmt: str | None = None
     limits: FieldLimits | None = None  # an input's allowed range or values
+    symbol: str = ""  # a value cell's symbol (a table cell's: its column's)
+    equation: str | None = None  # a calculation row's template `equation` text
+    parts: tuple[Any, ...] | None = None  # an equation cell's parts (equation_text)
 
 
 @dataclass
@@ -49,6 +53,20 @@ class SheetPlan:
     charts: list[dict[str, Any]] = field(default_factory=list)
     last_row: int = 0
     last_col: int = COL_CLAUSE
+    # a table column's header equation, placed once every name is registered
+    column_equations: list[ColumnEquation] = field(default_factory=list)
+
+
+@dataclass(frozen=True)
+class ColumnEquation:
+    """Where a table column's equation goes in its header, and what it is made from."""
+
+    row: int
+    col: int
+    table: str
+    field: str
+    formula: str | None  # the column's default formula pattern, row context substituted
+    equation: str | None  # the template's `equation` text for the column
 
 
 def plan_sheets(
@@ -166,7 +184,8 @@ def _place_scalar_row(
     ]
     qid = substitute_ctx(r.id, ctx) if r.id else None
     name = substitute_ctx(r.name, ctx) if r.name else None
-    value_cell = Cell(row, COL_VALUE, "calc", qid=qid, ctx=dict(ctx), fmt=r.fmt)
+    symbol = substitute_ctx(r.symbol, ctx)
+    value_cell = Cell(row, COL_VALUE, "calc", qid=qid, ctx=dict(ctx), fmt=r.fmt, symbol=symbol)
     if r.input is not None:
         path = substitute_ctx(r.input, ctx)
         value_cell.style = "input"
@@ -176,6 +195,7 @@ def _place_scalar_row(
     elif r.formula is not None:
         value_cell.style = "result" if r.key else "calc"
         value_cell.formula = r.formula
+        value_cell.equation = substitute_ctx(r.equation, ctx) if r.equation else None
         _register_calc(registry, qid, plan.name, row, COL_VALUE, label, r.unit, r.clause, name)
     elif r.text is not None:
         value_cell.style = "text"
@@ -200,10 +220,24 @@ def _place_table(
         ]
         if col.width:
             plan.widths[c] = max(plan.widths.get(c, 0), col.width)
-    plan.header_rows.append((header_top, header_top + 2))
+    plan.header_rows.append((header_top, header_top + TABLE_HEADER_ROWS - 1))
     plan.last_col = max(plan.last_col, len(columns) - 1)
-    first = row + 3
+    first = row + TABLE_HEADER_ROWS
     name = substitute_ctx(block.table or "", plan.ctx)
+    for c, col in enumerate(columns):
+        if col.formula is not None or col.equation:
+            pattern = col.formula if isinstance(col.formula, str) else (col.formula or {})
+            default = pattern if isinstance(pattern, str) else pattern.get("default")
+            plan.column_equations.append(
+                ColumnEquation(
+                    header_top + 3,
+                    c,
+                    name,
+                    col.field,
+                    _ctx_or_none(default, plan.ctx),
+                    substitute_ctx(col.equation, plan.ctx) if col.equation else None,
+                )
+            )
     tpos = TablePos(name=name, sheet=plan.name, key=block.key or "key", first_row=first)
     tpos.cols = {col.field: c for c, col in enumerate(columns)}
     tpos.patterns = {col.field: col.id for col in columns if col.id}
@@ -229,7 +263,7 @@ def _table_cell(
     registry: Registry,
 ) -> Cell:
     qid = substitute_ctx(col.id, ctx) if col.id else None
-    cell = Cell(row, c, "calc", qid=qid, ctx=ctx, table=table, fmt=col.fmt)
+    cell = Cell(row, c, "calc", qid=qid, ctx=ctx, table=table, fmt=col.fmt, symbol=col.header)
     label = f"{col.header} [{ctx.get('row_label', row + 1)}]"
     if col.input is not None:
         path = substitute_ctx(col.input, ctx)
@@ -244,6 +278,16 @@ def _table_cell(
         cell.style = "text"
         cell.text = substitute_ctx(col.text, ctx)
     return cell
+
+
+def _ctx_or_none(pattern: str | None, ctx: dict[str, Any]) -> str | None:
+    """`pattern` with the sheet's context; None where it needs a row's own context."""
+    if pattern is None:
+        return None
+    try:
+        return substitute_ctx(pattern, ctx)
+    except TemplateError:
+        return None
 
 
 def pick_variant(formula: str | dict[str, str], ctx: dict[str, Any]) -> str:
