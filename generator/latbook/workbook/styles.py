@@ -37,7 +37,7 @@ _BASE: dict[str, dict[str, Any]] = {
         "text_wrap": True,
         "bottom": 1,
     },
-    "equation": {"font_size": 9, "align": "left"},
+    "equation": {"font_size": 9, "align": "left", "valign": "top", "text_wrap": True},
     "th_equation": {"font_size": 8, "italic": True, "align": "center", "text_wrap": True},
     "cover_label": {"bold": True},
     "cover_value": {"text_wrap": True, "valign": "top"},
