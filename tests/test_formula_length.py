@@ -60,3 +60,25 @@ def test_interpolation_steps_are_visible():
     r = compute_results(parse_spec(spec))
     assert (r["seismic.Cu_lo"], r["seismic.Cu_hi"]) == (1.5, 1.4)
     assert r["seismic.Cu"] == pytest.approx(1.45, rel=1e-12)
+
+
+@pytest.mark.parametrize(("seed", "levels", "long_ids"), [(21, 3, False), (9, 2, True)])
+def test_printed_equations_stay_within_200_characters(seed, levels, long_ids):
+    # the equation column's formulas: a shorter form is chosen where a line would be longer
+    from latbook.build import check_spec
+    from latbook.workbook.builder import layout
+    from latbook.workbook.equation_layout import EQUATION_STYLE
+    from latbook.workbook.rendered import cell_formula
+
+    spec = make_spec(
+        random.Random(seed), levels, 3, seismic="site_class", wind=True, long_ids=long_ids
+    )
+    plans, registry = layout(check_spec(spec)[0])
+    lengths = {
+        f"{p.name}!{c.row}": len(cell_formula(c, p.name, registry))
+        for p in plans
+        for c in p.cells
+        if c.style == EQUATION_STYLE and c.formula is not None
+    }
+    assert len(lengths) > 200
+    assert {k: n for k, n in lengths.items() if n > LIMIT} == {}

@@ -82,9 +82,17 @@ CHECK_ROWS: list[tuple[str, str, object]] = [
     ("not equal", "=S_DS<>1", False),
     ("greater or equal", "=W_seis>=500", True),
     ("text join", '="R="&6.5', "R=6.5"),
-    # TEXT with the one format the workbook uses (a factor in a combination's name)
+    # TEXT with the formats the workbook uses (a factor in a combination's name; the printed
+    # equations), on values off a decimal half (at a half the engines differ: TEXT_FORMATS)
     ("TEXT 0.0# rounds", '=TEXT(2.999999999999997,"0.0#")', "3.0"),
     ("TEXT 0.0# keeps two", '=TEXT(2.25,"0.0#")', "2.25"),
+    ("TEXT 0", '=TEXT(-7.6,"0")', "-8"),
+    ("TEXT 0.0", '=TEXT(1234567.891,"0.0")', "1234567.9"),
+    ("TEXT 0.00", '=TEXT(S_DS*2/3,"0.00")', "0.67"),
+    ("TEXT 0.000", '=TEXT(-0.3954,"0.000")', "-0.395"),
+    ("TEXT 0.0000", '=TEXT(EXP(-0.0000362*720),"0.0000")', "0.9743"),
+    ("TEXT of text", '=TEXT("D","0.000")', "D"),
+    ("text join of TEXT", '="Cs = "&TEXT(0.13785,"0.000")', "Cs = 0.138"),
     ("percent", "=50%*W_seis", 0.5 * W_SEIS_KIP),
 ]
 

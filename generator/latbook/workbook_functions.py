@@ -12,6 +12,7 @@ import re
 __all__ = [
     "ALLOWED_FUNCTIONS",
     "EXCLUDED_FUNCTIONS",
+    "TEXT_FORMATS",
     "disallowed_functions",
     "functions_used",
 ]
@@ -38,9 +39,16 @@ ALLOWED_FUNCTIONS: frozenset[str] = frozenset(
         "SQRT",
         "SUM",
         "SUMPRODUCT",
-        "TEXT",  # display only, format "0.0#": the engines differ on an exact binary half
+        "TEXT",  # display only, in TEXT_FORMATS
     }
 )
+
+# The number formats TEXT may print with. Display only: LibreOffice (and Excel) round half
+# away from zero on the decimal value (TEXT(0.125,"0.00") = "0.13"), formulas 1.3.4 rounds the
+# binary value half to even ("0.12"), so a value on an exact decimal half reads differently;
+# no result is ever computed from TEXT. The printed equations (workbook/equation_text.py) use
+# the fixed-decimal formats.
+TEXT_FORMATS: tuple[str, ...] = ("0.0#", "0", "0.0", "0.00", "0.000", "0.0000")
 
 # Measured to disagree between LibreOffice 7.4.7 and formulas 1.3.4; the reason is kept so
 # a generator refusing one can say why.

@@ -6,6 +6,7 @@ cached values come from the engine's results, keyed by quantity id.
 
 from __future__ import annotations
 
+import collections
 import contextlib
 import datetime as dt
 import gc
@@ -26,6 +27,8 @@ from latbook.spec.models import Spec
 from latbook.workbook.cautions import CAUTION_SHORT
 from latbook.workbook.context import build_context
 from latbook.workbook.cover import COVER_SHEET, write_cover
+from latbook.workbook.equation_layout import place_equations
+from latbook.workbook.equation_text import cached_text
 from latbook.workbook.index_sheet import INDEX_SHEET, write_index
 from latbook.workbook.input_check import HELPER_CACHED, CellGroup, plan_input_check
 from latbook.workbook.layout import LAST_GRID_COL, Cell, SheetPlan, plan_sheets
@@ -80,6 +83,7 @@ def layout(spec: Spec) -> tuple[list[SheetPlan | CellGroup], Registry]:
     check), and the registry, without writing anything."""
     registry = Registry()
     plans = plan_sheets(all_templates(), build_context(spec), registry)
+    place_equations(plans, registry)
     return [*plans, *plan_input_check(plans, registry)], registry
 
 
@@ -149,10 +153,11 @@ def _write(spec, results, placed, registry, tmp, spec_json, spec_sha256, protect
         cover.fit_to_pages(1, 0)  # cover.py's fixed columns are a little wider than the page
 
     sheets = {plan.name: wb.add_worksheet(plan.name) for plan in plans}
+    values = printed_values(plans, results)
     for plan in plans:
         ws = sheets[plan.name]
-        pages = plan_pages(plan, results)
-        _write_plan(ws, plan, pages, registry, results, styles)
+        pages = plan_pages(plan, values)
+        _write_plan(ws, plan, pages, registry, values, styles)
         _write_charts(wb, ws, plan, registry)
         _finish_sheet(ws, header, pages, LAST_GRID_COL, protect)
 
@@ -203,6 +208,12 @@ def _drop_open_archives(exc: BaseException) -> None:
             tb = tb.tb_next
 
 
+def printed_values(plans: list[SheetPlan], results: Mapping[str, Any]) -> Mapping[str, Any]:
+    """What the printed equations show: the engine's results and the input cells' values."""
+    inputs = {c.qid: c.value for p in plans for c in p.cells if c.style == "input" and c.qid}
+    return collections.ChainMap(dict(results), inputs)
+
+
 def plan_pages(plan: SheetPlan, results: Mapping[str, Any]) -> SheetPages:
     """Row heights, page breaks and repeated rows of a calc sheet (pagination.py)."""
     return paginate(plan, row_heights(plan, results, title_cells(plan, CAUTION_SHORT)))
@@ -218,9 +229,10 @@ def page_counts(spec: Spec, results: Mapping[str, Any]) -> dict[str, int]:
     cover = scratch.add_worksheet(COVER_SHEET)
     last = write_cover(cover, spec, "0" * 64, styles, results)
     counts[COVER_SHEET] = _sheet_pages(cover, last, _cover_scale(cover))
-    for plan in plans:
-        if isinstance(plan, SheetPlan):
-            counts[plan.name] = plan_pages(plan, results).pages
+    sheet_plans = [p for p in plans if isinstance(p, SheetPlan)]
+    values = printed_values(sheet_plans, results)
+    for plan in sheet_plans:
+        counts[plan.name] = plan_pages(plan, values).pages
     tables = scratch.add_worksheet(TABLES_SHEET)
     last = write_tables(scratch, tables, reference_tables(), styles)
     counts[TABLES_SHEET] = _sheet_pages(tables, last)
@@ -318,7 +330,10 @@ def _write_cell(ws, sheet, cell: Cell, registry, tables, results, styles) -> Non
         ws.merge_range(cell.row, cell.col, cell.row, cell.col + cell.span - 1, "", fmt)
     if cell.formula is not None:
         formula = cell_formula(cell, sheet, registry)
-        value = _cached(results[cell.qid])
+        if cell.parts is not None:  # a printed equation: text from the engine's values
+            value = cached_text(cell.parts, lambda qid: _value_of(qid, results))
+        else:
+            value = _cached(results[cell.qid])
         if isinstance(value, str) and cell.style in TEXT_RESULT_STYLES:
             fmt = styles.get(TEXT_RESULT_STYLES[cell.style], cell.fmt)  # text reads from the left
         ws.write_formula(cell.row, cell.col, formula, fmt, value)
@@ -326,6 +341,13 @@ def _write_cell(ws, sheet, cell: Cell, registry, tables, results, styles) -> Non
         _write_input(ws, cell, fmt)
     elif cell.text is not None:
         ws.write_string(cell.row, cell.col, cell.text, fmt)
+
+
+def _value_of(qid: str, results) -> Any:
+    """A quantity's value: the engine's, or an input's value as built."""
+    if qid in results:
+        return results[qid]
+    raise BuildError(f"an equation prints '{qid}', which has no engine value")
 
 
 def _cached(value: Any) -> Any:

@@ -11,7 +11,7 @@ from typing import Any
 
 from latbook.spec.limits import FieldLimits, field_limits
 from latbook.workbook.context import Context
-from latbook.workbook.formula import ctx_fields, substitute_ctx
+from latbook.workbook.formula import TemplateError, ctx_fields, substitute_ctx
 from latbook.workbook.print_grid import GRID_COLS
 from latbook.workbook.registry import Entry, Registry, TablePos
 from latbook.workbook.table_chunks import ChunkColumn, chunk_columns
@@ -24,6 +24,7 @@ COL_CLAUSE = 7
 SCALAR_SPANS = {COL_EQUATION: COL_CLAUSE - COL_EQUATION, COL_CLAUSE: GRID_COLS - COL_CLAUSE}
 LAST_GRID_COL = GRID_COLS - 1
 FIRST_BLOCK_ROW = 3  # rows 0-2: sheet title, caution line, blank
+TABLE_HEADER_ROWS = 4  # header, unit, clause, equation
 
 
 @dataclass
@@ -41,6 +42,9 @@ class Cell:
     table: str | None = None
     fmt: str | None = None
     limits: FieldLimits | None = None  # an input's allowed range or values
+    symbol: str = ""  # a value cell's symbol (a table cell's: its column's)
+    equation: str | None = None  # a calculation row's template `equation` text
+    parts: tuple[Any, ...] | None = None  # an equation cell's parts (equation_text)
     span: int = 1  # grid columns the cell covers (merged when > 1)
     table_row: int | None = None  # a table cell: its row in the table's first column chunk
 
@@ -69,6 +73,21 @@ class SheetPlan:
     blocks: list[PrintBlock] = field(default_factory=list)
     last_row: int = 0
     last_col: int = LAST_GRID_COL
+    # a table column's header equation, placed once every name is registered
+    column_equations: list[ColumnEquation] = field(default_factory=list)
+
+
+@dataclass(frozen=True)
+class ColumnEquation:
+    """Where a table column's equation goes in its header, and what it is made from."""
+
+    row: int
+    col: int
+    table: str
+    field: str
+    formula: str | None  # the column's default formula pattern, row context substituted
+    equation: str | None  # the template's `equation` text for the column
+    span: int = 1  # grid columns the header cell covers
 
 
 def plan_sheets(
@@ -199,7 +218,8 @@ def _place_scalar_row(
     ]
     qid = substitute_ctx(r.id, ctx) if r.id else None
     name = substitute_ctx(r.name, ctx) if r.name else None
-    value_cell = Cell(row, COL_VALUE, "calc", qid=qid, ctx=dict(ctx), fmt=r.fmt)
+    symbol = substitute_ctx(r.symbol, ctx)
+    value_cell = Cell(row, COL_VALUE, "calc", qid=qid, ctx=dict(ctx), fmt=r.fmt, symbol=symbol)
     if r.input is not None:
         path = substitute_ctx(r.input, ctx)
         value_cell.style = "input"
@@ -209,6 +229,7 @@ def _place_scalar_row(
     elif r.formula is not None:
         value_cell.style = "result" if r.key else "calc"
         value_cell.formula = r.formula
+        value_cell.equation = substitute_ctx(r.equation, ctx) if r.equation else None
         _register_calc(registry, qid, plan.name, row, COL_VALUE, label, r.unit, r.clause, name)
     elif r.text is not None:
         value_cell.style = "text"
@@ -252,14 +273,19 @@ def _place_table(
                     span=pc.span,
                 ),
             ]
-        plan.header_rows.append((row, row + 2))
-        first = row + 3
+            if pc in chunk and (col.formula is not None or col.equation):
+                plan.column_equations.append(_column_equation(plan, col, name, row + 3, pc))
+        last_header = row + TABLE_HEADER_ROWS - 1
+        plan.header_rows.append((row, last_header))
+        first = last_header + 1
         first_rows.append(first)
         for pc in chunk:
             tpos.cols[columns[pc.index].field] = pc.grid_col
             tpos.offsets[columns[pc.index].field] = first - first_rows[0]
         row = first + len(rows)
-        plan.blocks.append(PrintBlock(start, max(row - 1, first - 1), (first - 3, first - 1)))
+        plan.blocks.append(
+            PrintBlock(start, max(row - 1, first - 1), (first - TABLE_HEADER_ROWS, first - 1))
+        )
         if k + 1 < len(chunks):
             row += 1
     tpos.first_row = first_rows[0] if first_rows else row
@@ -283,6 +309,23 @@ def _place_table(
     return row
 
 
+def _column_equation(
+    plan: SheetPlan, col: Column, table: str, row: int, pc: ChunkColumn
+) -> ColumnEquation:
+    """Where and from what a table column's header equation is made (equation_layout.py)."""
+    pattern = col.formula if isinstance(col.formula, str) else (col.formula or {})
+    default = pattern if isinstance(pattern, str) else pattern.get("default")
+    return ColumnEquation(
+        row,
+        pc.grid_col,
+        table,
+        col.field,
+        _ctx_or_none(default, plan.ctx),
+        substitute_ctx(col.equation, plan.ctx) if col.equation else None,
+        pc.span,
+    )
+
+
 def _key_copy(key_column: Column, ctx: dict[str, Any], row: int, key: str) -> Cell:
     """The key column repeated in a later chunk, as text: the key column's text (a level,
     line or segment id), else the row's key."""
@@ -301,7 +344,7 @@ def _table_cell(
     registry: Registry,
 ) -> Cell:
     qid = substitute_ctx(col.id, ctx) if col.id else None
-    cell = Cell(row, c, "calc", qid=qid, ctx=ctx, table=table, fmt=col.fmt)
+    cell = Cell(row, c, "calc", qid=qid, ctx=ctx, table=table, fmt=col.fmt, symbol=col.header)
     label = f"{col.header} [{ctx.get('row_label', row + 1)}]"
     if col.input is not None:
         path = substitute_ctx(col.input, ctx)
@@ -316,6 +359,16 @@ def _table_cell(
         cell.style = "text"
         cell.text = substitute_ctx(col.text, ctx)
     return cell
+
+
+def _ctx_or_none(pattern: str | None, ctx: dict[str, Any]) -> str | None:
+    """`pattern` with the sheet's context; None where it needs a row's own context."""
+    if pattern is None:
+        return None
+    try:
+        return substitute_ctx(pattern, ctx)
+    except TemplateError:
+        return None
 
 
 def pick_variant(formula: str | dict[str, str], ctx: dict[str, Any]) -> str:

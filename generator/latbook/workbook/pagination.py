@@ -20,6 +20,7 @@ from collections.abc import Iterable, Mapping
 from dataclasses import dataclass, field
 from typing import Any
 
+from latbook.workbook.equation_text import cached_text
 from latbook.workbook.layout import Cell, SheetPlan
 from latbook.workbook.print_grid import (
     GRID_COLS,
@@ -55,6 +56,8 @@ def cell_text(cell: Cell, results: Mapping[str, Any]) -> str | None:
     formula's text result."""
     if cell.text is not None:
         return cell.text
+    if cell.parts is not None:  # a printed equation
+        return cached_text(cell.parts, lambda qid: results[qid])
     if cell.formula is not None and cell.qid is not None:
         value = results.get(cell.qid)
         return value if isinstance(value, str) else None

@@ -35,6 +35,7 @@ class Row:
     when: str | None = None
     fmt: str | None = None
     key: bool = False
+    equation: str | None = None  # printed right-hand side, see workbook/equation_text.py
 
 
 @dataclass(frozen=True)
@@ -52,6 +53,7 @@ class Column:
     when: str | None = None
     fmt: str | None = None
     width: float | None = None
+    equation: str | None = None  # the header's equation where it cannot be generated
 
 
 @dataclass(frozen=True)
