@@ -23,9 +23,10 @@ from latbook import __version__
 from latbook.atomic_file import atomic_output
 from latbook.spec.limits import FieldLimits
 from latbook.spec.models import Spec
-from latbook.workbook.cautions import CAUTION_SHORT
+from latbook.workbook.cautions import CAUTION_SHORT, caution_line
 from latbook.workbook.context import build_context
 from latbook.workbook.cover import COVER_SHEET, write_cover
+from latbook.workbook.cover_criteria import plan_cover_criteria
 from latbook.workbook.index_sheet import INDEX_SHEET, write_index
 from latbook.workbook.input_check import HELPER_CACHED, CellGroup, plan_input_check
 from latbook.workbook.layout import COL_CLAUSE, Cell, SheetPlan, plan_sheets
@@ -53,11 +54,15 @@ class BuildError(RuntimeError):
 
 
 def layout(spec: Spec) -> tuple[list[SheetPlan | CellGroup], Registry]:
-    """Every sheet's plan, then the cells placed on the Cover and SpecData (the live input
-    check), and the registry, without writing anything."""
+    """Every sheet's plan, then the cells placed on the Cover (the live input check and
+    design criteria) and SpecData (the input check), and the registry, without writing
+    anything."""
     registry = Registry()
     plans = plan_sheets(all_templates(), build_context(spec), registry)
-    return [*plans, *plan_input_check(plans, registry)], registry
+    groups = plan_input_check(plans, registry)
+    cover = next(g for g in groups if g.name == COVER_SHEET)
+    cover.cells += plan_cover_criteria(spec, registry)
+    return [*plans, *groups], registry
 
 
 def write_workbook(
@@ -107,7 +112,7 @@ def _write(spec, results, placed, registry, tmp, spec_json, spec_sha256, protect
             "title": f"Lateral calculation: {spec.project.name}",
             "subject": "Lateral force-resisting system",
             "author": spec.project.engineer,
-            "comments": CAUTION_SHORT,
+            "comments": caution_line(spec),
             "created": FIXED_TIMESTAMP,
         }
     )
@@ -123,8 +128,9 @@ def _write(spec, results, placed, registry, tmp, spec_json, spec_sha256, protect
     _finish_sheet(cover, header, last, 1, protect, landscape=False)
 
     sheets = {plan.name: wb.add_worksheet(plan.name) for plan in plans}
+    caution = caution_line(spec)
     for plan in plans:
-        _write_plan(sheets[plan.name], plan, registry, results, styles)
+        _write_plan(sheets[plan.name], plan, registry, results, styles, caution)
         ws = sheets[plan.name]
         _write_charts(wb, ws, plan, registry)
         for top, bottom in plan.header_rows[:1]:
@@ -178,13 +184,15 @@ def _drop_open_archives(exc: BaseException) -> None:
             tb = tb.tb_next
 
 
-def _write_plan(ws: Worksheet, plan: SheetPlan, registry: Registry, results, styles) -> None:
+def _write_plan(
+    ws: Worksheet, plan: SheetPlan, registry: Registry, results, styles, caution: str
+) -> None:
     for col, width in SCALAR_WIDTHS.items():
         ws.set_column(col, col, max(width, plan.widths.get(col, 0)))
     for col in range(len(SCALAR_WIDTHS), plan.last_col + 1):
         ws.set_column(col, col, plan.widths.get(col, TABLE_WIDTH))
     ws.write_string(0, 0, plan.title, styles.get("title"))
-    ws.write_string(1, 0, CAUTION_SHORT, styles.get("caution"))
+    ws.write_string(1, 0, caution, styles.get("caution"))
     tables = registry.tables
     for cell in plan.cells:
         _write_cell(ws, plan.name, cell, registry, tables, results, styles)
