@@ -103,6 +103,24 @@ CASES = [
         "$.drift.wind_serviceability_factor",
         "greater_than_equal",
     ),
+    # the Cover's revision block and mark (limits: latbook's own, common practice)
+    ("project.preliminary", "yes", "$.project.preliminary", "bool_type"),
+    (
+        "project.revisions",
+        [{"revision": "A", "description": "x" * 201}],
+        "$.project.revisions[0].description",
+        "string_too_long",
+    ),
+    ("project.revisions", [{"date": "2026-12-02"}], "$.project.revisions[0].revision", "missing"),
+    (
+        "project.revisions",
+        [{"revision": "A"}, {"revision": "a"}],
+        "$.project.revisions[1].revision",
+        "unique",
+    ),
+    # the demo gives revision "A": the last listed revision must be that one
+    ("project.revisions", [{"revision": "1"}], "$.project.revision", "consistent"),
+    ("project.revisions", [{"revision": "A"}] * 21, "$.project.revisions", "too_long"),
 ]
 
 

@@ -20,7 +20,8 @@ import pytest
 
 from latbook.build import build_workbook, check_spec
 from latbook.recalc import find_soffice
-from latbook.workbook.builder import FOOTER_CAUTION, layout, page_counts
+from latbook.workbook.builder import layout, page_counts
+from latbook.workbook.cautions import FOOTER_REVIEW
 from latbook.workbook.layout import SheetPlan
 from tests.helpers.printout import page_sheet, print_pdf, read_pages
 
@@ -80,7 +81,7 @@ def test_long_labels_and_the_footer_print_in_full(printed):
     for page in pages:
         sheet = page_sheet(page, [*names, "Cover", "Tables"])
         words_by_sheet.setdefault(sheet, Counter()).update(_tokens(page.text))
-        assert FOOTER_CAUTION in page.text, "footer caution cut"
+        assert FOOTER_REVIEW in page.text, "footer caution cut"
     for plan in plans:
         if not isinstance(plan, SheetPlan):
             continue

@@ -10,6 +10,7 @@ from typing import Any
 
 from latbook.analysis.build_check import build_check_results
 from latbook.analysis.combinations import combination_results
+from latbook.analysis.criteria import criteria_results
 from latbook.analysis.diaphragm import diaphragm_results
 from latbook.analysis.foundation import foundation_results
 from latbook.analysis.inputs import input_results
@@ -36,6 +37,7 @@ STEPS = [
     drift_results,
     summary_results,
     schedule_results,
+    criteria_results,
     build_check_results,
 ]
 

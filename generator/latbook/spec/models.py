@@ -18,6 +18,7 @@ MAX_SEGMENTS_PER_STORY = 40
 MAX_OPENINGS_PER_STORY = 40
 MAX_ASSEMBLIES = 40
 MAX_TEXT = 500
+MAX_REVISIONS = 20
 
 Identifier = Annotated[
     str,
@@ -45,6 +46,29 @@ class _Strict(BaseModel):
     model_config = ConfigDict(extra="forbid", frozen=True, allow_inf_nan=False)
 
 
+RevisionLabel = Annotated[
+    str,
+    Field(min_length=1, max_length=12, description="e.g. A, 1 or P2."),
+    AfterValidator(storable_text),
+]
+RevisionDate = Annotated[
+    str,
+    Field(max_length=40, description="Issue date as the engineer writes it, e.g. 2026-12-02."),
+    AfterValidator(storable_text),
+]
+RevisionText = Annotated[str, Field(max_length=200), AfterValidator(storable_text)]
+Initials = Annotated[str, Field(max_length=40), AfterValidator(storable_text)]
+
+
+class Revision(_Strict):
+    """One issue of the calculation: a row of the Cover's revision block."""
+
+    revision: RevisionLabel
+    date: RevisionDate = ""
+    description: RevisionText = Field("", description="What the issue is for or what changed.")
+    by: Initials = Field("", description="Name or initials.")
+
+
 class Project(_Strict):
     """Who, what and which revision: printed on the cover and in every page header."""
 
@@ -57,6 +81,18 @@ class Project(_Strict):
     date: Text = Field("", description="Issue date as the engineer writes it, e.g. 2026-12-02.")
     revision: Text = "0"
     notes: Text = ""
+    revisions: list[Revision] = Field(
+        default_factory=list,
+        max_length=MAX_REVISIONS,
+        description="Issues of the calculation, oldest first, for the Cover's revision block; "
+        "the last is the current one (revision and date, where given, must match it). Empty: "
+        "one row from revision and date.",
+    )
+    preliminary: bool = Field(
+        False,
+        description="true marks the calculation 'PRELIMINARY - not for construction' on the "
+        "Cover and on every sheet.",
+    )
 
 
 class CodeBasis(_Strict):

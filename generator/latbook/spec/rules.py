@@ -20,6 +20,7 @@ def check_rules(spec: Spec) -> list[Problem]:
     below each story, so they run once every other rule holds; the rules that need the seismic
     analysis (§11.4.8 exception 3, §12.8.1.3) run last."""
     problems = [
+        *_revisions(spec),
         *_levels(spec),
         *_sheet_names(spec),
         *_level_weights(spec),
@@ -38,6 +39,38 @@ def check_rules(spec: Spec) -> list[Problem]:
     if not problems:
         problems += _seismic_analysis(spec)
     return problems
+
+
+def _revisions(spec: Spec) -> Iterator[Problem]:
+    """Revision labels are unique; the last listed revision is the current issue, so the
+    project's revision and date, where given, are its own (the page header prints them)."""
+    project = spec.project
+    seen: set[str] = set()
+    for i, rev in enumerate(project.revisions):
+        label = rev.revision.strip().casefold()
+        if label in seen:
+            path = json_path(("project", "revisions", i, "revision"))
+            yield Problem(path, "unique", "revision listed twice")
+        seen.add(label)
+    if not project.revisions:
+        return
+    last = project.revisions[-1]
+    given = project.model_fields_set
+    n = len(project.revisions) - 1
+    if "revision" in given and project.revision != last.revision:
+        yield Problem(
+            json_path(("project", "revision")),
+            "consistent",
+            f"must equal the last listed revision ({last.revision!r} at "
+            f"$.project.revisions[{n}].revision), or be left out",
+        )
+    if "date" in given and project.date != last.date:
+        yield Problem(
+            json_path(("project", "date")),
+            "consistent",
+            f"must equal the date of the last listed revision ({last.date!r} at "
+            f"$.project.revisions[{n}].date), or be left out",
+        )
 
 
 def _levels(spec: Spec) -> Iterator[Problem]:

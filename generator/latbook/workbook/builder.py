@@ -24,9 +24,10 @@ from latbook import __version__
 from latbook.atomic_file import atomic_output
 from latbook.spec.limits import FieldLimits
 from latbook.spec.models import Spec
-from latbook.workbook.cautions import CAUTION_SHORT
+from latbook.workbook.cautions import caution_line, footer_caution
 from latbook.workbook.context import build_context
 from latbook.workbook.cover import COVER_SHEET, write_cover
+from latbook.workbook.cover_criteria import plan_cover_criteria
 from latbook.workbook.equation_layout import place_equations
 from latbook.workbook.equation_text import cached_text
 from latbook.workbook.index_sheet import INDEX_SHEET, write_index
@@ -60,9 +61,6 @@ from latbook.workbook.templates import all_templates, reference_tables
 
 SPEC_CHUNK = 30000
 FIXED_TIMESTAMP = dt.datetime(2000, 1, 1, 0, 0, 0)
-# The footer's caution: short enough for a third of the page at 8 pt (the full caution is
-# on the Cover and under each sheet's title).
-FOOTER_CAUTION = "Engineer's review and seal required"
 HEADER_FOOTER_FONT = "&8"
 HEADER_TEXT_CHARS = 40
 CHART_WIDTH_PX = round(0.95 * sum(col_width_pt(w) for w in GRID_WIDTHS) / 0.75)
@@ -79,12 +77,16 @@ class BuildError(RuntimeError):
 
 
 def layout(spec: Spec) -> tuple[list[SheetPlan | CellGroup], Registry]:
-    """Every sheet's plan, then the cells placed on the Cover and SpecData (the live input
-    check), and the registry, without writing anything."""
+    """Every sheet's plan, then the cells placed on the Cover (the live input check and
+    design criteria) and SpecData (the input check), and the registry, without writing
+    anything."""
     registry = Registry()
     plans = plan_sheets(all_templates(), build_context(spec), registry)
     place_equations(plans, registry)
-    return [*plans, *plan_input_check(plans, registry)], registry
+    groups = plan_input_check(plans, registry)
+    cover = next(g for g in groups if g.name == COVER_SHEET)
+    cover.cells += plan_cover_criteria(spec, registry)
+    return [*plans, *groups], registry
 
 
 def write_workbook(
@@ -134,7 +136,7 @@ def _write(spec, results, placed, registry, tmp, spec_json, spec_sha256, protect
             "title": f"Lateral calculation: {spec.project.name}",
             "subject": "Lateral force-resisting system",
             "author": spec.project.engineer,
-            "comments": CAUTION_SHORT,
+            "comments": caution_line(spec),
             "created": FIXED_TIMESTAMP,
         }
     )
@@ -153,11 +155,12 @@ def _write(spec, results, placed, registry, tmp, spec_json, spec_sha256, protect
         cover.fit_to_pages(1, 0)  # cover.py's fixed columns are a little wider than the page
 
     sheets = {plan.name: wb.add_worksheet(plan.name) for plan in plans}
+    caution = caution_line(spec)
     values = printed_values(plans, results)
     for plan in plans:
         ws = sheets[plan.name]
-        pages = plan_pages(plan, values)
-        _write_plan(ws, plan, pages, registry, values, styles)
+        pages = plan_pages(plan, values, caution)
+        _write_plan(ws, plan, pages, registry, values, styles, caution)
         _write_charts(wb, ws, plan, registry)
         _finish_sheet(ws, header, pages, LAST_GRID_COL, protect)
 
@@ -214,9 +217,9 @@ def printed_values(plans: list[SheetPlan], results: Mapping[str, Any]) -> Mappin
     return collections.ChainMap(dict(results), inputs)
 
 
-def plan_pages(plan: SheetPlan, results: Mapping[str, Any]) -> SheetPages:
+def plan_pages(plan: SheetPlan, results: Mapping[str, Any], caution: str) -> SheetPages:
     """Row heights, page breaks and repeated rows of a calc sheet (pagination.py)."""
-    return paginate(plan, row_heights(plan, results, title_cells(plan, CAUTION_SHORT)))
+    return paginate(plan, row_heights(plan, results, title_cells(plan, caution)))
 
 
 def page_counts(spec: Spec, results: Mapping[str, Any]) -> dict[str, int]:
@@ -232,7 +235,7 @@ def page_counts(spec: Spec, results: Mapping[str, Any]) -> dict[str, int]:
     sheet_plans = [p for p in plans if isinstance(p, SheetPlan)]
     values = printed_values(sheet_plans, results)
     for plan in sheet_plans:
-        counts[plan.name] = plan_pages(plan, values).pages
+        counts[plan.name] = plan_pages(plan, values, caution_line(spec)).pages
     tables = scratch.add_worksheet(TABLES_SHEET)
     last = write_tables(scratch, tables, reference_tables(), styles)
     counts[TABLES_SHEET] = _sheet_pages(tables, last)
@@ -263,14 +266,20 @@ def _cover_scale(ws: Worksheet) -> float:
 
 
 def _write_plan(
-    ws: Worksheet, plan: SheetPlan, pages: SheetPages, registry: Registry, results, styles
+    ws: Worksheet,
+    plan: SheetPlan,
+    pages: SheetPages,
+    registry: Registry,
+    results,
+    styles,
+    caution: str,
 ) -> None:
     for col, width in enumerate(GRID_WIDTHS):
         ws.set_column(col, col, width)
     for row, height in pages.heights.items():
         ws.set_row(row, height)
     tables = registry.tables
-    for cell in [*title_cells(plan, CAUTION_SHORT), *plan.cells]:
+    for cell in [*title_cells(plan, caution), *plan.cells]:
         _write_cell(ws, plan.name, cell, registry, tables, results, styles)
 
 
@@ -407,7 +416,7 @@ def _page_header(spec: Spec) -> tuple[str, str]:
     f = HEADER_FOOTER_FONT
     project = esc(f"{p.name} {p.number}")
     head = f"&L{f}{project}&C{f}&A&R{f}Rev {esc(p.revision)}  {esc(p.date)}"
-    foot = f"&L{f}latbook {__version__}&C{f}Page &P of &N&R{f}{esc(FOOTER_CAUTION)}"
+    foot = f"&L{f}latbook {__version__}&C{f}Page &P of &N&R{f}{esc(footer_caution(spec))}"
     return head, foot
 
 

@@ -50,12 +50,26 @@ _BASE: dict[str, dict[str, Any]] = {
         "bottom": 1,
     },
     "th_equation": {"font_size": 8, "italic": True, "align": "center", "text_wrap": True},
-    "cover_label": {"bold": True},
+    "cover_label": {"bold": True, "text_wrap": True, "valign": "top"},
     "cover_value": {"text_wrap": True, "valign": "top"},
     "cover_warning": {"bold": True, "text_wrap": True, "valign": "top", "border": 2},
+    "cover_caution": {"italic": True, "text_wrap": True, "valign": "top", "font_color": "#7a1f1f"},
+    "cover_mark": {"bold": True, "font_size": 12, "font_color": "#c00000", "text_wrap": True},
+    "cover_heading": {"bold": True, "font_size": 11, "bottom": 1},
+    "cover_note": {
+        "font_size": 8,
+        "italic": True,
+        "font_color": "#555555",
+        "text_wrap": True,
+        "valign": "top",
+    },
+    "cover_live": {"align": "left", "valign": "top", "text_wrap": True},
+    "cover_th": {"bold": True, "bottom": 1, "valign": "bottom"},
+    "seal_line": {"bottom": 1, "valign": "bottom"},
+    "seal_box": {"border": 1, "valign": "top", "font_size": 8, "font_color": "#555555"},
 }
 
-NUMERIC_STYLES = {"input", "calc", "result", "calc_text", "result_text"}
+NUMERIC_STYLES = {"input", "calc", "result", "calc_text", "result_text", "cover_live"}
 
 
 class Styles:
