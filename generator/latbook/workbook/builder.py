@@ -24,11 +24,12 @@ from latbook.atomic_file import atomic_output
 from latbook.spec.limits import FieldLimits
 from latbook.spec.models import Spec
 from latbook.workbook.cautions import CAUTION_SHORT
+from latbook.workbook.chart_styles import series_style
 from latbook.workbook.context import build_context
 from latbook.workbook.cover import COVER_SHEET, write_cover
 from latbook.workbook.index_sheet import INDEX_SHEET, write_index
 from latbook.workbook.input_check import HELPER_CACHED, CellGroup, plan_input_check
-from latbook.workbook.layout import COL_CLAUSE, Cell, SheetPlan, plan_sheets
+from latbook.workbook.layout import CHART_ROW_PX, COL_CLAUSE, Cell, SheetPlan, plan_sheets
 from latbook.workbook.registry import Registry, a1
 from latbook.workbook.rendered import cell_formula
 from latbook.workbook.sheet_names import SPEC_SHEET
@@ -206,32 +207,77 @@ def _write_group(ws: Worksheet, group: CellGroup, registry: Registry, results, s
 
 
 def _write_charts(wb, ws: Worksheet, plan: SheetPlan, registry: Registry) -> None:
-    """Draw each chart block of `plan` (see layout._place_chart) from its table's columns."""
+    """Draw each chart block of `plan` (see layout._place_chart) from its tables' columns."""
     for spec in plan.charts:
-        tpos = registry.tables[spec["table"]]
-        if not tpos.rows or not spec["series"]:
+        series = [
+            s
+            for s in spec["series"]
+            if s["table"] in registry.tables and registry.tables[s["table"]].rows
+        ]
+        if not series:
             continue
         kind = {"type": spec["type"]}
         if spec["type"] == "scatter":
             kind["subtype"] = spec["subtype"]
         chart = wb.add_chart(kind)
-        x_col = tpos.cols[spec["x"]]
-        for series in spec["series"]:
-            col = tpos.cols[series["field"]]
-            chart.add_series(
-                {
-                    "name": series["name"],
-                    "categories": [tpos.sheet, tpos.first_row, x_col, tpos.last_row, x_col],
-                    "values": [tpos.sheet, tpos.first_row, col, tpos.last_row, col],
-                }
-            )
+        used: dict[str | None, int] = {}  # series drawn so far in each style cycle
+        for s in series:
+            n = used[s["cycle"]] = used.get(s["cycle"], -1) + 1
+            chart.add_series(_series_options(spec["type"], s, n, registry))
         if spec["title"]:
             chart.set_title({"name": spec["title"], "name_font": {"size": 11}})
-        chart.set_x_axis({"name": spec["x_title"]})
-        chart.set_y_axis({"name": spec["y_title"], "major_gridlines": {"visible": True}})
+        x_axis = {"name": spec["x_title"]}
+        y_axis = {"name": spec["y_title"], "major_gridlines": {"visible": True}}
+        frame = spec["frame"]
+        if frame is not None:
+            grid = {"visible": True, "line": {"color": "#D9D9D9", "width": 0.5}}
+            # "crossing": the other axis crosses at the minimum (axes along the plot's edges)
+            x_axis |= {**frame["x_axis"], "major_gridlines": grid, "crossing": "min"}
+            y_axis |= {**frame["y_axis"], "major_gridlines": grid, "crossing": "min"}
+            chart.set_plotarea({"layout": frame["layout"]})
+        if spec["type"] == "bar":  # y is the vertical category axis, x the value axis
+            x_axis, y_axis = y_axis, x_axis
+            x_axis["major_gridlines"] = {"visible": True}
+            y_axis.pop("major_gridlines", None)
+            if spec["reverse_categories"]:
+                y_axis |= {"reverse": True, "crossing": "max"}
+        chart.set_x_axis(x_axis)
+        chart.set_y_axis(y_axis)
         chart.set_legend({"position": "bottom"})
-        chart.set_size({"width": 720, "height": 20 * spec["rows"]})
+        for r in range(spec["row"], spec["row"] + spec["rows"]):
+            ws.set_row(r, CHART_ROW_PX * 0.75)  # points
+        if frame is not None:
+            chart.set_size({"width": frame["width"], "height": frame["height"]})
+        else:
+            chart.set_size({"width": CHART_WIDTH_PX, "height": CHART_ROW_PX * spec["rows"]})
         ws.insert_chart(spec["row"], 0, chart, {"object_position": 1})
+
+
+CHART_WIDTH_PX = 720  # 7.5 in at 96 px/in: a letter page's printable width (0.5 in margins)
+
+
+def _series_options(chart_type: str, s: dict, n: int, registry: Registry) -> dict[str, Any]:
+    """xlsxwriter options of one series: its cell ranges, name, style and point labels."""
+    tpos = registry.tables[s["table"]]
+    first, last = tpos.first_row, tpos.last_row
+    if s["span"] is not None:
+        first, last = tpos.first_row + s["span"][0], tpos.first_row + s["span"][1]
+    x_col, y_col = tpos.cols[s["x"]], tpos.cols[s["field"]]
+    options: dict[str, Any] = {
+        "name": s["name"],
+        "categories": [tpos.sheet, first, x_col, last, x_col],
+        "values": [tpos.sheet, first, y_col, last, y_col],
+        **series_style(chart_type, s["cycle"], n),
+        **s["style"],
+    }
+    if s["labels"] is not None:
+        custom = [{"value": text} if text else {"delete": True} for text in s["labels"]]
+        options["data_labels"] = {
+            "value": True,
+            "custom": custom,
+            "position": s["label_position"],
+        }
+    return options
 
 
 def _write_cell(ws, sheet, cell: Cell, registry, tables, results, styles) -> None:
