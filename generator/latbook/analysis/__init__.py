@@ -14,6 +14,7 @@ from latbook.analysis.criteria import criteria_results
 from latbook.analysis.diaphragm import diaphragm_results
 from latbook.analysis.foundation import foundation_results
 from latbook.analysis.inputs import input_results
+from latbook.analysis.plans import plan_results
 from latbook.analysis.schedules import schedule_results
 from latbook.analysis.seismic import seismic_results
 from latbook.analysis.shear_walls import shear_wall_results
@@ -27,6 +28,7 @@ Results = dict[str, Any]
 
 STEPS = [
     input_results,
+    plan_results,
     weight_results,
     seismic_results,
     wind_results,

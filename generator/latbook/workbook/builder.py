@@ -25,6 +25,7 @@ from latbook.atomic_file import atomic_output
 from latbook.spec.limits import FieldLimits
 from latbook.spec.models import Spec
 from latbook.workbook.cautions import caution_line, footer_caution
+from latbook.workbook.chart_styles import series_style
 from latbook.workbook.context import build_context
 from latbook.workbook.cover import COVER_SHEET, write_cover
 from latbook.workbook.cover_criteria import plan_cover_criteria
@@ -32,7 +33,7 @@ from latbook.workbook.equation_layout import place_equations
 from latbook.workbook.equation_text import cached_text
 from latbook.workbook.index_sheet import INDEX_SHEET, write_index
 from latbook.workbook.input_check import HELPER_CACHED, CellGroup, plan_input_check
-from latbook.workbook.layout import LAST_GRID_COL, Cell, SheetPlan, plan_sheets
+from latbook.workbook.layout import CHART_ROW_PX, LAST_GRID_COL, Cell, SheetPlan, plan_sheets
 from latbook.workbook.pagination import (
     SheetPages,
     greedy_pages,
@@ -299,38 +300,74 @@ def _write_group(ws: Worksheet, group: CellGroup, registry: Registry, results, s
 
 
 def _write_charts(wb, ws: Worksheet, plan: SheetPlan, registry: Registry) -> None:
-    """Draw each chart block of `plan` (see layout._place_chart) from its table's columns."""
+    """Draw each chart block of `plan` (see layout._place_chart) from its tables' columns."""
     for spec in plan.charts:
-        tpos = registry.tables[spec["table"]]
-        if not tpos.rows or not spec["series"]:
+        series = [
+            s
+            for s in spec["series"]
+            if s["table"] in registry.tables and registry.tables[s["table"]].rows
+        ]
+        if not series:
             continue
         kind = {"type": spec["type"]}
         if spec["type"] == "scatter":
             kind["subtype"] = spec["subtype"]
         chart = wb.add_chart(kind)
-        x_col = tpos.cols[spec["x"]]
-        x_rows = (tpos.row_of(spec["x"], tpos.first_row), tpos.row_of(spec["x"], tpos.last_row))
-        for series in spec["series"]:
-            field_name = series["field"]
-            col = tpos.cols[field_name]
-            top, bottom = (
-                tpos.row_of(field_name, tpos.first_row),
-                tpos.row_of(field_name, tpos.last_row),
-            )
-            chart.add_series(
-                {
-                    "name": series["name"],
-                    "categories": [tpos.sheet, x_rows[0], x_col, x_rows[1], x_col],
-                    "values": [tpos.sheet, top, col, bottom, col],
-                }
-            )
+        used: dict[str | None, int] = {}  # series drawn so far in each style cycle
+        for s in series:
+            n = used[s["cycle"]] = used.get(s["cycle"], -1) + 1
+            chart.add_series(_series_options(spec["type"], s, n, registry))
         if spec["title"]:
             chart.set_title({"name": spec["title"], "name_font": {"size": 11}})
-        chart.set_x_axis({"name": spec["x_title"]})
-        chart.set_y_axis({"name": spec["y_title"], "major_gridlines": {"visible": True}})
+        x_axis = {"name": spec["x_title"]}
+        y_axis = {"name": spec["y_title"], "major_gridlines": {"visible": True}}
+        frame = spec["frame"]
+        if frame is not None:
+            grid = {"visible": True, "line": {"color": "#D9D9D9", "width": 0.5}}
+            # "crossing": the other axis crosses at the minimum (axes along the plot's edges)
+            x_axis |= {**frame["x_axis"], "major_gridlines": grid, "crossing": "min"}
+            y_axis |= {**frame["y_axis"], "major_gridlines": grid, "crossing": "min"}
+            chart.set_plotarea({"layout": frame["layout"]})
+        if spec["type"] == "bar":  # y is the vertical category axis, x the value axis
+            x_axis, y_axis = y_axis, x_axis
+            x_axis["major_gridlines"] = {"visible": True}
+            y_axis.pop("major_gridlines", None)
+            if spec["reverse_categories"]:
+                y_axis |= {"reverse": True, "crossing": "max"}
+        chart.set_x_axis(x_axis)
+        chart.set_y_axis(y_axis)
         chart.set_legend({"position": "bottom"})
-        chart.set_size({"width": CHART_WIDTH_PX, "height": 20 * spec["rows"]})
+        if frame is not None:
+            chart.set_size({"width": frame["width"], "height": frame["height"]})
+        else:
+            chart.set_size({"width": CHART_WIDTH_PX, "height": CHART_ROW_PX * spec["rows"]})
         ws.insert_chart(spec["row"], 0, chart, {"object_position": 1})
+
+
+def _series_options(chart_type: str, s: dict, n: int, registry: Registry) -> dict[str, Any]:
+    """xlsxwriter options of one series: its cell ranges, name, style and point labels."""
+    tpos = registry.tables[s["table"]]
+    first, last = tpos.first_row, tpos.last_row
+    if s["span"] is not None:
+        first, last = tpos.first_row + s["span"][0], tpos.first_row + s["span"][1]
+    x, y = s["x"], s["field"]
+    x_col, y_col = tpos.cols[x], tpos.cols[y]
+    # a field's rows are those of its column chunk (TablePos.offsets)
+    options: dict[str, Any] = {
+        "name": s["name"],
+        "categories": [tpos.sheet, tpos.row_of(x, first), x_col, tpos.row_of(x, last), x_col],
+        "values": [tpos.sheet, tpos.row_of(y, first), y_col, tpos.row_of(y, last), y_col],
+        **series_style(chart_type, s["cycle"], n),
+        **s["style"],
+    }
+    if s["labels"] is not None:
+        custom = [{"value": text} if text else {"delete": True} for text in s["labels"]]
+        options["data_labels"] = {
+            "value": True,
+            "custom": custom,
+            "position": s["label_position"],
+        }
+    return options
 
 
 def _write_cell(ws, sheet, cell: Cell, registry, tables, results, styles) -> None:

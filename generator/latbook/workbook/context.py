@@ -14,6 +14,7 @@ from latbook.analysis.wind import torsional_cases_apply
 from latbook.spec.models import Spec
 from latbook.spec.schedule_rows import schedule_collections
 from latbook.workbook.diaphragm_context import diaphragm_collections, wall_input_collections
+from latbook.workbook.plan_context import plan_collections
 from latbook.workbook.regularity_context import regularity_collections
 from latbook.workbook.wall_collections import wall_collections
 from latbook.workbook.weights_context import weight_collections, weight_flags
@@ -122,4 +123,5 @@ COLLECTION_BUILDERS = [
     weight_collections,
     regularity_collections,
     schedule_collections,
+    plan_collections,
 ]

@@ -12,6 +12,7 @@ from typing import Any
 from latbook.spec.limits import FieldLimits, field_limits
 from latbook.workbook.context import Context
 from latbook.workbook.formula import TemplateError, ctx_fields, substitute_ctx
+from latbook.workbook.plan_chart import plan_frame
 from latbook.workbook.print_grid import GRID_COLS
 from latbook.workbook.registry import Entry, Registry, TablePos
 from latbook.workbook.table_chunks import ChunkColumn, chunk_columns
@@ -131,42 +132,107 @@ def _place_blocks(plan: SheetPlan, context: Context, registry: Registry) -> None
     plan.last_row = row
 
 
-CHART_ROWS = 16  # rows a chart covers (xlsxwriter's default chart is 288 px, 15 rows of 20 px)
+CHART_ROWS = 16  # rows a chart covers, CHART_ROW_PX each
+CHART_ROW_PX = 22  # rows under a chart get this height (16.5 pt) explicitly: LibreOffice sizes
+# a chart by the rows it spans, and its default row height (17 px) is not Excel's (20 px)
 
 
 def _place_chart(plan: SheetPlan, block: Block, context: Context, row: int) -> int:
-    """Reserve rows for a chart fed from a table's columns; the builder draws it.
+    """Reserve rows for a chart fed from table columns; the builder draws it.
 
-    `[blocks.chart]` keys: `table` (a table name, <ctx> allowed; it may be laid out anywhere),
-    `x` (field of the x values), `series` (list of {field, name, when}; a series whose `when`
-    fails is left out), optional `type` ("scatter" or "line"), `subtype` (scatter lines:
-    "straight", the default, or "smooth"),
-    `x_title`, `y_title`, `rows` (height in rows, default CHART_ROWS). The chart's title is the
-    block's title. Series are live: they point at the table's formula cells.
+    `[blocks.chart]` keys (<ctx> allowed in names and titles):
+    - `table`: the table the series read (laid out anywhere); `x`: field of the x values or
+      categories. A series may name its own `table` and `x` (one chart over several tables
+      with the same rows, e.g. seismic and wind forces by level).
+    - `type`: "scatter" (default), "line", "column" or "bar" (horizontal bars; the category
+      axis is vertical); `subtype` (scatter lines: "straight", the default, or "smooth").
+    - `series`: list of {field, name, when, table, x, rows, cycle, line, marker, labels}. A
+      series whose `when` fails is left out. `rows` takes only the rows of the chart's `over`
+      collection whose `groups` hold that name (their span, first to last); `rows = "p:*"`
+      makes one series per distinct group starting with "p:", `<group>` in its name being
+      the rest of the group. A blank cell in the span (a gap row) breaks the line.
+      Style: `line` / `marker` (xlsxwriter options) as given; otherwise the next style of
+      the `cycle` named (chart_styles.CYCLES: "line", "walls", "bar"; default by type), so
+      series differ by dash, marker or fill pattern, not colour alone. `labels`: a field of
+      the `over` rows whose text labels each point (blank: no label), placed at
+      `label_position` (xlsxwriter: "left", "below", ...; default "left").
+    - `reverse_categories`: true puts the first category at the top of a bar chart (levels
+      are roof first, so the roof is drawn at the top).
+    - `scale = "plan"`: equal x and y scales from the plan of the sheet's `<level>`, fixed at
+      build time (plan_chart.plan_frame gives axes, size and plot layout).
+    - `x_title`, `y_title`, `rows` (height in rows, default CHART_ROWS). The chart's title is
+      the block's title. Series are live: they point at the tables' formula cells.
     """
     spec = dict(block.chart or {})
     ctx = plan.ctx
-    series = [
-        {"field": s["field"], "name": substitute_ctx(s.get("name", s["field"]), ctx)}
-        for s in spec.get("series", [])
-        if context.holds(s.get("when"))
-    ]
+    over = context.collections[substitute_ctx(spec["over"], ctx)] if "over" in spec else []
+    series = []
+    for s in spec.get("series", []):
+        if context.holds(s.get("when")):
+            series += _chart_series(s, spec, over, ctx)
     rows = int(spec.get("rows", CHART_ROWS))
+    frame = None
+    if spec.get("scale") == "plan":
+        levels = context.spec_data["building"]["levels"]
+        level_plan = next(lv["plan"] for lv in levels if lv["id"] == ctx["level"])
+        frame = plan_frame(level_plan, len(series))
+        rows = -(-frame["height"] // CHART_ROW_PX) + 1
     plan.charts.append(
         {
             "row": row,
             "rows": rows,
             "type": spec.get("type", "scatter"),
             "subtype": spec.get("subtype", "straight"),
-            "table": substitute_ctx(spec["table"], ctx),
-            "x": spec["x"],
             "series": series,
             "title": substitute_ctx(block.title, ctx),
             "x_title": substitute_ctx(spec.get("x_title", ""), ctx),
             "y_title": substitute_ctx(spec.get("y_title", ""), ctx),
+            "reverse_categories": bool(spec.get("reverse_categories", False)),
+            "frame": frame,
         }
     )
     return row + rows
+
+
+def _chart_series(
+    s: dict[str, Any], spec: dict[str, Any], over: list[dict[str, Any]], ctx: dict[str, Any]
+) -> list[dict[str, Any]]:
+    """One template series resolved: table, fields, row span (indices into the table's rows)
+    and style; a `rows = "p:*"` series expands to one per group."""
+    base = {
+        "table": substitute_ctx(s.get("table", spec.get("table", "")), ctx),
+        "x": s.get("x", spec.get("x")),
+        "field": s["field"],
+        "cycle": s.get("cycle"),
+        "style": {k: s[k] for k in ("line", "marker") if k in s},
+        "span": None,
+        "labels": None,
+        "label_position": s.get("label_position", "left"),
+    }
+    name = s.get("name", s["field"])
+    selector = s.get("rows")
+    if selector is None:
+        return [{**base, "name": substitute_ctx(name, ctx)}]
+    if selector.endswith("*"):
+        prefix = selector[:-1]
+        groups = list(dict.fromkeys(g for r in over for g in r["groups"] if g.startswith(prefix)))
+    else:
+        groups = [selector]
+    out = []
+    for group in groups:
+        hits = [i for i, r in enumerate(over) if group in r["groups"]]
+        if not hits:
+            continue
+        span = (hits[0], hits[-1])
+        if len(hits) != span[1] - span[0] + 1:
+            raise TemplateError(f"chart rows '{group}' are not one run of rows in '{spec['over']}'")
+        labels = None
+        if "labels" in s:
+            labels = [str(r.get(s["labels"], "")) for r in over[span[0] : span[1] + 1]]
+        shown = group[len(selector) - 1 :] if selector.endswith("*") else group
+        label = substitute_ctx(name, {**ctx, "group": shown})
+        out.append({**base, "name": label, "span": span, "labels": labels})
+    return out
 
 
 def _place_note(plan: SheetPlan, block: Block, row: int) -> int:
@@ -353,8 +419,12 @@ def _table_cell(
         cell.limits = field_limits(path)
         _register_input(registry, qid, plan.name, row, c, label, col, None, path, table)
     elif col.formula is not None:
-        cell.formula = pick_variant(col.formula, ctx)
-        _register_calc(registry, qid, plan.name, row, c, label, col.unit, col.clause, None, table)
+        formula = pick_variant(col.formula, ctx)
+        if formula:  # a variant given as "" leaves the cell blank (a gap in a chart series)
+            cell.formula = formula
+            _register_calc(
+                registry, qid, plan.name, row, c, label, col.unit, col.clause, None, table
+            )
     elif col.text is not None:
         cell.style = "text"
         cell.text = substitute_ctx(col.text, ctx)

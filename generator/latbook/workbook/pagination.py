@@ -21,7 +21,7 @@ from dataclasses import dataclass, field
 from typing import Any
 
 from latbook.workbook.equation_text import cached_text
-from latbook.workbook.layout import Cell, SheetPlan
+from latbook.workbook.layout import CHART_ROW_PX, Cell, SheetPlan
 from latbook.workbook.print_grid import (
     GRID_COLS,
     ROW_MIN_PT,
@@ -33,7 +33,6 @@ from latbook.workbook.print_grid import (
 from latbook.workbook.styles import font_of
 
 TITLE_ROW, CAUTION_ROW = 0, 1
-CHART_ROW_PT = 15.75  # 21 px; a chart is drawn 20 px per reserved row (builder)
 
 
 @dataclass
@@ -84,7 +83,7 @@ def row_heights(
         heights[cell.row] = max(heights.get(cell.row, ROW_MIN_PT), h)
     for chart in plan.charts:
         for r in range(chart["row"], chart["row"] + chart["rows"]):
-            heights[r] = CHART_ROW_PT
+            heights[r] = CHART_ROW_PX * 0.75  # points
     return heights
 
 
