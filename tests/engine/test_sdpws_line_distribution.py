@@ -89,3 +89,17 @@ def test_a_segment_with_more_slack_than_the_common_displacement_takes_no_shear()
     _, shares = ld.distribute_by_deflection(6000.0, [2500.0, 2800.0, 700.0], segs, [True] * 3)
     assert shares[2] == 0.0
     assert sum(shares) == pytest.approx(6000.0, rel=REL)
+
+
+def test_anchorage_slope_is_the_scaled_elongation_term_while_the_hold_down_lifts():
+    # Derived: Δa = e T / P_rated with T = (F V h - M_r)/arm / F, so dΔa/dV = e/P_rated h/arm
+    # = 0.12/4500 x 9/7.7 while F V h > M_r (0.7 x 3000 x 9 = 18900 > 5000), else 0; 0 where
+    # Δa is given instead of scaled.
+    s = _seg(8.0, 13.0, M_res=5000.0, elongation=0.12, rated=4500.0)
+    expected = 0.12 / 4500.0 * 9.0 / 7.7
+    assert ld.anchorage_slope_in_per_lb(3000.0, s) == pytest.approx(expected, rel=REL)
+    assert ld.anchorage_slope_in_per_lb(500.0, s) == 0.0  # 0.7 x 500 x 9 = 3150 < 5000
+    assert ld.anchorage_slope_in_per_lb(3000.0, _seg(8.0, 13.0, M_res=5000.0)) == 0.0
+    slope = _flex_in_per_lb(s) + 9.0 / 8.0 * expected
+    assert ld.evaluate(3000.0, s).inv_slope_lb_per_in == pytest.approx(1 / slope, rel=REL)
+    assert ld.evaluate(3000.0, s).anchorage_slope_in_per_lb == pytest.approx(expected, rel=REL)

@@ -144,6 +144,8 @@ def combination_results(spec: Spec, out: dict[str, Any]) -> None:
             q[f"seismic_resisting_{tag}"] = fm.seismic_resisting_name
             q[f"overstrength_additive_{tag}"] = fm.overstrength_additive_name
             q[f"overstrength_resisting_{tag}"] = fm.overstrength_resisting_name
+            gm = combinations.gravity_lateral_combination(m, "seis", SDS_g, rho)
+            q[f"seismic_gravity_{tag}"] = gm.name
         q["Fac_E"] = f.seismic_lateral
         q["Fac_E_dia"] = f_dia.seismic_lateral
         q["Fac_D_E_add"] = f.seismic_dead_additive

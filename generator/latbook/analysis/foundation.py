@@ -43,4 +43,5 @@ def foundation_results(spec: Spec, out: dict[str, Any]) -> None:
             max(a.vs_nominal_plf, a.vw_nominal_plf),
             max(a.face2_vs_nominal_plf or 0.0, a.face2_vw_nominal_plf or 0.0),
         ]
+        out[f"{base}.v_face1_plf"], out[f"{base}.v_face2_plf"] = faces
         out[f"{base}.plate_washer"] = anchorage.plate_washer_text(faces)

@@ -129,19 +129,26 @@ def perimeter_side(spec: Spec, seg: SegmentPlace) -> str:
     return "interior"
 
 
-def _supported(seg: SegmentPlace, story: StoryPlace, spec: Spec) -> str:
-    """'base' in the lowest story; else 'yes' where a segment on the same line in the story
-    below spans the whole segment, 'no' otherwise (in-plane discontinuity, Type V4)."""
+def _spanning_count(seg: SegmentPlace, story: StoryPlace) -> int | str:
+    """How many segments on the same line in the story below span the whole segment (within
+    EPS_FT); '-' in the lowest story."""
     if story.below is None:
-        return "base"
+        return "-"
     s0, s1 = seg.segment.start_ft, seg.segment.start_ft + seg.segment.length_ft
-    for st in seg.line.stories:
-        if st.level != story.below.id:
-            continue
-        for other in st.segments:
-            if other.start_ft <= s0 + EPS_FT and other.start_ft + other.length_ft >= s1 - EPS_FT:
-                return "yes"
-    return "no"
+    return sum(
+        other.start_ft <= s0 + EPS_FT and other.start_ft + other.length_ft >= s1 - EPS_FT
+        for st in seg.line.stories
+        if st.level == story.below.id
+        for other in st.segments
+    )
+
+
+def _supported(n_span: int | str) -> str:
+    """'base' in the lowest story; else 'yes' where a segment in the story below spans the
+    whole segment, 'no' otherwise (in-plane discontinuity, Table 12.3-2 Type 4)."""
+    if isinstance(n_span, str):
+        return "base"
+    return "yes" if n_span > 0 else "no"
 
 
 def regularity_results(
@@ -177,7 +184,8 @@ def regularity_results(
                 if k > 0
                 else 0.0
             )
-            supported = _supported(seg, sd.story, spec)
+            n_span = _spanning_count(seg, sd.story)
+            supported = _supported(n_span)
             unsupported += supported == "no"
             segs.append(
                 {
@@ -188,6 +196,9 @@ def regularity_results(
                     "stiff": stiff,
                     "side": perimeter_side(spec, seg),
                     "bays": red.light_frame_bays(L, hsx) if k > 0 else 0.0,
+                    "x0": seg.segment.start_ft,
+                    "x1": seg.segment.start_ft + L,
+                    "n_span": n_span,
                     "supported": supported,
                     "key": seg.key,
                 }
@@ -213,6 +224,9 @@ def regularity_results(
                 "cum_share",
                 "side",
                 "bays",
+                "x0",
+                "x1",
+                "n_span",
                 "supported",
             ):
                 out[f"{base}.{key}"] = g[key]

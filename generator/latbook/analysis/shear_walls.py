@@ -284,6 +284,7 @@ def _distribute(spec, out, story, line, geo, assemblies, src, V_line, combo) -> 
                 ("T", st.T_defl_lb),
                 ("da", st.delta_a_in),
                 ("d", st.delta_in),
+                ("dda", st.anchorage_slope_in_per_lb),
                 ("ia", st.inv_slope_lb_per_in),
                 ("ba", st.b_over_a_lb),
                 ("Vr", raw),
@@ -353,6 +354,7 @@ def _geometry(spec: Spec, out, story, seg: SegmentPlace, assemblies) -> dict[str
     k = sheathing.wall_aspect_factor(ar, a.sheathing, "capacity")
     f_ar = sheathing.wall_aspect_factor(ar, a.sheathing, "deflection")
     basis = _basis(spec)
+    posts = (s.post_D_lb, s.post_L_lb, s.post_Lr_lb, s.post_S_lb)
     g = {
         "L": s.length_ft,
         "h": h,
@@ -367,6 +369,13 @@ def _geometry(spec: Spec, out, story, seg: SegmentPlace, assemblies) -> dict[str
         "M_r": sw.resisting_moment_lbft(
             s.dead_load_plf, s.length_ft, min(s.point_load_start_lb, s.point_load_end_lb), 0.0
         ),
+        # hold-down arm and the end post's gravity loads (a blank post load counts 0)
+        "arm": s.length_ft - s.hold_down_offset_ft,
+        "P_D": max(s.point_load_start_lb, s.point_load_end_lb) + (s.post_D_lb or 0.0),
+        "P_L": s.post_L_lb or 0.0,
+        "P_Lr": s.post_Lr_lb or 0.0,
+        "P_S": s.post_S_lb or 0.0,
+        "post_given": "yes" if any(v is not None for v in posts) else "no",
     }
     for key, value in g.items():
         out[f"{base}.{key}"] = value
@@ -384,16 +393,11 @@ def _segment_forces(spec, out, base, above, seg: SegmentPlace, g, src, V_seg, co
         M_r, fac_r = g["M_r"], fac_d
     uplift = sw.net_uplift_lb(M_ot, M_r, fac_r, s.length_ft, s.hold_down_offset_ft)
     T_story = sw.hold_down_tension_lb(M_ot, M_r, fac_r, s.length_ft, s.hold_down_offset_ft)
-    D_post = max(s.point_load_start_lb, s.point_load_end_lb) + (s.post_D_lb or 0.0)
     C_d_story = sw.end_post_compression_lb(
-        M_ot, s.length_ft, s.hold_down_offset_ft, fac_d_add * D_post
+        M_ot, s.length_ft, s.hold_down_offset_ft, fac_d_add * g["P_D"]
     )
     f_lat, f_D, f_L, f_Lr, f_S = (out[f"combo.{name}"] for name in _GRAVITY[src])
-    gravity = (
-        f_D * D_post
-        + f_L * (s.post_L_lb or 0.0)
-        + max(f_Lr * (s.post_Lr_lb or 0.0), f_S * (s.post_S_lb or 0.0))
-    )
+    gravity = f_D * g["P_D"] + f_L * g["P_L"] + max(f_Lr * g["P_Lr"], f_S * g["P_S"])
     C_g_story = sw.end_post_compression_lb(
         f_lat * V_seg * g["h"], s.length_ft, s.hold_down_offset_ft, gravity
     )
@@ -416,7 +420,7 @@ def _segment_forces(spec, out, base, above, seg: SegmentPlace, g, src, V_seg, co
     }
     for key, value in values.items():
         out[f"{base}.{key}_{src}"] = value
-    given = any(v is not None for v in (s.post_D_lb, s.post_L_lb, s.post_Lr_lb, s.post_S_lb))
+    given = g["post_given"] == "yes"
     out[f"{base}.C_basis_{src}"] = POST_LOADS_TEXT if given else NO_POST_LOADS_TEXT
 
 

@@ -118,6 +118,22 @@ END_POST_BASIS = (
 )
 
 
+WIND_SERVICE_BASIS = (
+    "Serviceability wind for drift (ASCE 7-16 App. C, CC.2.2): 0.42 x strength-level W is about "
+    "the 10-year wind (common practice)"
+)
+
+
+def distribution_by(spec: Spec) -> str:
+    """How a wall line's shear is shared by its segments (SDPWS-2015 §4.3.3.4.1; SW_dist)."""
+    if spec.shear_walls.line_distribution == "capacity":
+        return "capacity L k v (the Exception)"
+    return (
+        "deflection (the same top displacement by Eq. 4.3-1; two fixed passes, Δa at the "
+        "hold-down force)"
+    )
+
+
 LIVE_CHOICES = ("torsion", "collector", "omega", "distribution", "wind_drift", "cantilever")
 """Choices the Summary prints as live formulas of their input cells (the rest are fixed text)."""
 
@@ -144,16 +160,9 @@ def design_choices(spec: Spec, out: dict[str, Any]) -> dict[str, str]:
             "Ω0 applied (ASCE 7-16 Table 12.2-1, note g for flexible diaphragms): "
             + combinations.number_text(out["combo.Omega0_used"])
         )
-    if spec.shear_walls.line_distribution == "capacity":
-        how = "capacity L k v (the Exception)"
-    else:
-        how = (
-            "deflection (the same top displacement by Eq. 4.3-1; two fixed passes, Δa at the "
-            "hold-down force)"
-        )
     texts["distribution"] = (
-        f"Shear in a wall line (SDPWS-2015 §4.3.3.4.1): by {how}; collectors share the line "
-        "force by L k"
+        f"Shear in a wall line (SDPWS-2015 §4.3.3.4.1): by {distribution_by(spec)}; collectors "
+        "share the line force by L k"
     )
     texts["sheathing"] = SHEATHING_BASIS
     texts["hold_down_drift"] = HOLD_DOWN_DRIFT_BASIS
@@ -161,10 +170,10 @@ def design_choices(spec: Spec, out: dict[str, Any]) -> dict[str, str]:
         texts["wind_drift"] = (
             "Wind drift at a serviceability wind: "
             + combinations.number_text(spec.drift.wind_serviceability_factor)
-            + " x strength-level W on the force-driven deflection (ASCE 7-16 App. C, CC.2.2; "
-            "0.42 about the 10-year wind, common practice), limit h/"
+            + " x strength-level W on the force-driven deflection, limit h/"
             + combinations.number_text(spec.drift.wind_ratio)
         )
+        texts["wind_service"] = WIND_SERVICE_BASIS
     texts["end_posts"] = END_POST_BASIS
     tolerated = "yes" if spec.diaphragms.cantilever_deflection_tolerated else "no"
     texts["cantilever"] = (
@@ -212,6 +221,7 @@ def summary_results(spec: Spec, out: dict[str, Any]) -> None:
     for key, text in design_choices(spec, out).items():
         if key in LIVE_CHOICES:
             out[f"summary.choice.{key}"] = text
+    out["summary.choice.distribution_by"] = distribution_by(spec)
     _basis_results(spec, out)
     dcrs: list[float] = []
     open_text = NOT_MADE
@@ -247,6 +257,7 @@ def summary_results(spec: Spec, out: dict[str, Any]) -> None:
         out[f"{base}.open"] = row_open
         out[f"{base}.open_cum"] = open_text
     out["summary.dcr_max"] = max(dcrs)
+    out["summary.not_made"] = "-" if open_text == NOT_MADE else open_text
     if max(dcrs) > 1:
         overall = FAILS_TEXT + (f"; {open_text}" if open_text != NOT_MADE else "")
     elif open_text != NOT_MADE:

@@ -79,6 +79,8 @@ class PassState:
     """1/a of the line δ = a V + b (0 for a segment that is not a shear wall)."""
     b_over_a_lb: float
     """b/a = δ/a - V."""
+    anchorage_slope_in_per_lb: float = 0.0
+    """dΔa/dV at V (shown for every segment; 1/a ignores it where the segment carries none)."""
 
 
 def lifts(V_lb: float, seg: SegmentFlexibility) -> bool:
@@ -86,15 +88,21 @@ def lifts(V_lb: float, seg: SegmentFlexibility) -> bool:
     return seg.lateral_factor * V_lb * seg.h_ft - seg.M_resist_lbft > 0
 
 
+def anchorage_slope_in_per_lb(V_lb: float, seg: SegmentFlexibility) -> float:
+    """dΔa/dV at V (SDPWS-2015 Eq. 4.3-1, Δa scaled to the hold-down force): (rated
+    elongation / rated load) h / (L - offset) while the hold-down lifts, else 0; 0 where Δa is
+    given rather than scaled [in/lb]."""
+    scaled = seg.elongation_at_rated_in is not None and seg.rated_load_lb is not None
+    if scaled and lifts(V_lb, seg):
+        return seg.elongation_at_rated_in / seg.rated_load_lb * seg.h_ft / seg.arm_ft  # type: ignore[operator]
+    return 0.0
+
+
 def slope_in_per_lb(V_lb: float, seg: SegmentFlexibility) -> float:
     """dδ/dV of Eq. 4.3-1 at V: 8h^3/(E A b^2) + h/(1000 Ga b) + (h/b) dΔa/dV [in/lb]."""
     bend = 8.0 * seg.h_ft**3 / (seg.E_psi * seg.A_in2 * seg.b_ft**2)
     shear = seg.h_ft / (1000.0 * seg.Ga_kips_per_in * seg.b_ft)
-    scaled = seg.elongation_at_rated_in is not None and seg.rated_load_lb is not None
-    d_da = 0.0
-    if scaled and lifts(V_lb, seg):
-        d_da = seg.elongation_at_rated_in / seg.rated_load_lb * seg.h_ft / seg.arm_ft  # type: ignore[operator]
-    return bend + shear + seg.h_ft / seg.b_ft * d_da
+    return bend + shear + seg.h_ft / seg.b_ft * anchorage_slope_in_per_lb(V_lb, seg)
 
 
 def evaluate(V_lb: float, seg: SegmentFlexibility, carries: bool = True) -> PassState:
@@ -106,10 +114,11 @@ def evaluate(V_lb: float, seg: SegmentFlexibility, carries: bool = True) -> Pass
     delta = sw.shear_wall_deflection_in(
         v, seg.h_ft, seg.E_psi, seg.A_in2, seg.b_ft, seg.Ga_kips_per_in, da
     )
+    d_da = anchorage_slope_in_per_lb(V_lb, seg)
     if not carries:
-        return PassState(V_lb, T, da, delta, 0.0, 0.0)
+        return PassState(V_lb, T, da, delta, 0.0, 0.0, d_da)
     ia = 1.0 / slope_in_per_lb(V_lb, seg)
-    return PassState(V_lb, T, da, delta, ia, delta * ia - V_lb)
+    return PassState(V_lb, T, da, delta, ia, delta * ia - V_lb, d_da)
 
 
 def common_displacement_in(V_line_lb: float, states: list[PassState]) -> float:
