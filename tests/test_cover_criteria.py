@@ -228,7 +228,7 @@ def test_preliminary_only_where_marked(tmp_path):
     assert wb.properties.description.startswith(PRELIMINARY_MARK)
 
 
-def test_cover_prints_on_letter_portrait_at_full_scale(example):
+def test_cover_prints_on_letter_within_its_columns(example):
     # five columns within 7.5 in; fonts of 8 pt or more; wrapped cells in rows of set height
     assert len(COVER_WIDTHS) == 5
     assert cover_width_px() <= LETTER_PRINTABLE_IN * PX_PER_IN
@@ -241,7 +241,8 @@ def test_cover_prints_on_letter_portrait_at_full_scale(example):
     }
     for col, width in enumerate(COVER_WIDTHS, start=1):
         assert widths[col] == pytest.approx(width, abs=0.72)  # xlsxwriter adds padding
-    assert ws.page_setup.orientation == "portrait"
+    assert ws.page_setup.orientation == "landscape"
+    assert "$A$1:$E$" in ws.print_area  # all five columns print
     span = {(m.min_row, m.min_col): (m.min_col, m.max_col) for m in ws.merged_cells.ranges}
     cached = openpyxl.load_workbook(example.path, data_only=True)[COVER_SHEET]
     for row in ws.iter_rows():

@@ -24,9 +24,11 @@ from latbook import __version__
 from latbook.atomic_file import atomic_output
 from latbook.spec.limits import FieldLimits
 from latbook.spec.models import Spec
+from latbook.spec.revisions import current_revision
 from latbook.workbook.cautions import caution_line, footer_caution
 from latbook.workbook.chart_styles import series_style
 from latbook.workbook.context import build_context
+from latbook.workbook.cover import COL_LAST as COVER_LAST_COL
 from latbook.workbook.cover import COVER_SHEET, write_cover
 from latbook.workbook.cover_criteria import plan_cover_criteria
 from latbook.workbook.equation_layout import place_equations
@@ -64,7 +66,9 @@ SPEC_CHUNK = 30000
 FIXED_TIMESTAMP = dt.datetime(2000, 1, 1, 0, 0, 0)
 HEADER_FOOTER_FONT = "&8"
 HEADER_TEXT_CHARS = 40
-CHART_WIDTH_PX = round(0.95 * sum(col_width_pt(w) for w in GRID_WIDTHS) / 0.75)
+# A chart is anchored to cells by Excel's pixel widths (7 px per unit + 5): it must end inside
+# the grid, or LibreOffice draws it past the print area.
+CHART_WIDTH_PX = round(0.95 * sum(int(w * 7 + 0.5) + 5 for w in GRID_WIDTHS))
 # in_memory: assemble the parts in memory, not in one temp file per part (faster, and
 # nothing to clean up if a build is interrupted).
 WORKBOOK_OPTIONS = {"strings_to_formulas": False, "strings_to_urls": False, "in_memory": True}
@@ -151,9 +155,11 @@ def _write(spec, results, placed, registry, tmp, spec_json, spec_sha256, protect
     last = write_cover(cover, spec, spec_sha256, styles, results)
     _write_group(cover, groups[COVER_SHEET], registry, results, styles)
     _fix_row_heights(cover, last)
-    _finish_sheet(cover, header, SheetPages(last_row=last), 1, protect)
+    _finish_sheet(cover, header, SheetPages(last_row=last), COVER_LAST_COL, protect)
     if _cover_scale(cover) < 1.0:
-        cover.fit_to_pages(1, 0)  # cover.py's fixed columns are a little wider than the page
+        # cover.py's columns are a little wider than the page where LibreOffice prints with
+        # its fallback font (print_grid.col_width_pt): fit the width (about 95 %)
+        cover.fit_to_pages(1, 0)
 
     sheets = {plan.name: wb.add_worksheet(plan.name) for plan in plans}
     caution = caution_line(spec)
@@ -452,7 +458,8 @@ def _page_header(spec: Spec) -> tuple[str, str]:
     esc = _escape_header
     f = HEADER_FOOTER_FONT
     project = esc(f"{p.name} {p.number}")
-    head = f"&L{f}{project}&C{f}&A&R{f}Rev {esc(p.revision)}  {esc(p.date)}"
+    revision, date = current_revision(p)
+    head = f"&L{f}{project}&C{f}&A&R{f}Rev {esc(revision)}  {esc(date)}"
     foot = f"&L{f}latbook {__version__}&C{f}Page &P of &N&R{f}{esc(footer_caution(spec))}"
     return head, foot
 

@@ -1,8 +1,9 @@
 """The cover sheet: project block, live input check, design criteria, revisions, the seal
 and signature block, the stated options and choices, and the cautions.
 
-It prints on letter portrait at 100 %: five columns, 711 px (7.4 in) wide in all, inside the
-7.5 in between 0.5 in margins; every text cell wraps in a row made tall enough for it.
+It prints on letter landscape like the calc sheets: five columns, 711 px (7.4 in) wide in
+Excel; LibreOffice's wider fallback font makes them about 10.2 in, so the builder fits the
+width (about 95 %); every text cell wraps in a row made tall enough for it.
 Spec text goes in as text cells; the live values (input check, criteria) are formula cells
 placed by `cover_criteria.py` and `input_check.py` and written by the builder.
 """

@@ -11,7 +11,7 @@ from __future__ import annotations
 import math
 from typing import Any
 
-MAX_WIDTH_PX = 672  # 7.0 in at 96 px/in: inside a letter page's 7.5 in at 100 % scale
+MAX_WIDTH_PX = 640  # inside the print grid's 689 Excel pixels (builder.CHART_WIDTH_PX)
 MAX_INNER_HEIGHT_PX = 420  # with titles, axis and legend: within a landscape page (484 pt)
 MIN_WIDTH_PX = 420
 MARGIN_LEFT_PX, MARGIN_RIGHT_PX, MARGIN_TOP_PX = 70, 30, 44
