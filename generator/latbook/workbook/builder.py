@@ -325,8 +325,9 @@ def _write_charts(wb, ws: Worksheet, plan: SheetPlan, registry: Registry) -> Non
             chart.add_series(_series_options(spec["type"], s, n, registry))
         if spec["title"]:
             chart.set_title({"name": spec["title"], "name_font": {"size": 11}})
-        x_axis = {"name": spec["x_title"]}
-        y_axis = {"name": spec["y_title"], "major_gridlines": {"visible": True}}
+        fonts = {"name_font": {"size": 10}, "num_font": {"size": 9}}  # >= 7 pt printed
+        x_axis = {"name": spec["x_title"], **fonts}
+        y_axis = {"name": spec["y_title"], "major_gridlines": {"visible": True}, **fonts}
         frame = spec["frame"]
         if frame is not None:
             grid = {"visible": True, "line": {"color": "#D9D9D9", "width": 0.5}}
@@ -342,7 +343,7 @@ def _write_charts(wb, ws: Worksheet, plan: SheetPlan, registry: Registry) -> Non
                 y_axis |= {"reverse": True, "crossing": "max"}
         chart.set_x_axis(x_axis)
         chart.set_y_axis(y_axis)
-        chart.set_legend({"position": "bottom"})
+        chart.set_legend({"position": "bottom", "font": {"size": 9}})
         if frame is not None:
             chart.set_size({"width": frame["width"], "height": frame["height"]})
         else:
