@@ -16,6 +16,7 @@ import statistics
 from collections import Counter
 from pathlib import Path
 
+import openpyxl
 import pytest
 
 from latbook.build import build_workbook, check_spec
@@ -46,11 +47,20 @@ def printed(request, tmp_path_factory):
     out = tmp_path_factory.mktemp(request.param)
     build_workbook(data, out / "calc.xlsx")
     spec, results = check_spec(data)
-    return spec, results, read_pages(print_pdf(out / "calc.xlsx", out / "pdf"))
+    pages = read_pages(print_pdf(out / "calc.xlsx", out / "pdf"))
+    return spec, results, pages, _contents(out / "calc.xlsx")
+
+
+def _contents(xlsx: Path) -> dict[str, str]:
+    """The Cover's table of contents as written: sheet -> its pages ("5" or "5–7")."""
+    ws = openpyxl.load_workbook(xlsx, read_only=True)["Cover"]
+    rows = [tuple(c.value for c in r[:5]) for r in ws.iter_rows()]
+    start = next(i for i, r in enumerate(rows) if r[0] == "Sheet" and r[4] == "Pages")
+    return {r[0]: r[4] for r in rows[start + 1 :] if r[0] and r[4]}
 
 
 def test_every_page_is_legible(printed):
-    _, _, pages = printed
+    _, _, pages, _ = printed
     small = []
     for n, page in enumerate(pages, start=1):
         heights = [h for h, _ in page.words]
@@ -62,7 +72,7 @@ def test_every_page_is_legible(printed):
 
 
 def test_each_sheet_prints_on_the_pages_the_layout_counts(printed):
-    spec, results, pages = printed
+    spec, results, pages, _ = printed
     expected = page_counts(spec, results)
     found = Counter(page_sheet(page, list(expected)) for page in pages)
     assert None not in found, "a page without a sheet name in its header"
@@ -70,11 +80,26 @@ def test_each_sheet_prints_on_the_pages_the_layout_counts(printed):
     assert list(dict.fromkeys(page_sheet(p, list(expected)) for p in pages)) == list(expected)
 
 
+def test_the_contents_give_each_sheets_printed_pages(printed):
+    """The Cover's contents list every printed sheet with the page numbers it prints on
+    (the printout numbers its pages on from sheet to sheet; each page's header names its
+    sheet), and the footer prints those numbers."""
+    spec, results, pages, contents = printed
+    names = list(page_counts(spec, results))
+    assert list(contents) == names
+    for sheet, text in contents.items():
+        first, _, last = text.partition("\u2013")
+        numbers = range(int(first), int(last or first) + 1)
+        assert [page_sheet(pages[n - 1], names) for n in numbers] == [sheet] * len(numbers)
+        assert f"Page {numbers[0]} of {len(pages)}" in pages[numbers[0] - 1].text
+    assert int(contents["Tables"].split("\u2013")[-1]) == len(pages)
+
+
 def test_long_labels_and_the_footer_print_in_full(printed):
     """The words of each sheet's longest labels and headers are all on that sheet's pages
     (a clipped cell loses its last words; words are compared split at hyphens, where a
     wrapped line may break); every page carries the footer's caution."""
-    spec, _, pages = printed
+    spec, _, pages, _ = printed
     plans, _ = layout(spec)
     names = [p.name for p in plans if isinstance(p, SheetPlan)]
     words_by_sheet: dict[str, Counter] = {}

@@ -29,7 +29,7 @@ from latbook.workbook.cautions import caution_line, footer_caution
 from latbook.workbook.chart_styles import series_style
 from latbook.workbook.context import build_context
 from latbook.workbook.cover import COL_LAST as COVER_LAST_COL
-from latbook.workbook.cover import COVER_SHEET, write_cover
+from latbook.workbook.cover import COVER_SHEET, write_contents_pages, write_cover
 from latbook.workbook.cover_criteria import plan_cover_criteria
 from latbook.workbook.equation_layout import place_equations
 from latbook.workbook.equation_text import cached_text
@@ -59,7 +59,7 @@ from latbook.workbook.rendered import cell_formula
 from latbook.workbook.sheet_names import SPEC_SHEET
 from latbook.workbook.styles import Styles
 from latbook.workbook.tables_sheet import LAST_COL as TABLES_LAST_COL
-from latbook.workbook.tables_sheet import TABLES_SHEET, write_tables
+from latbook.workbook.tables_sheet import TABLES_SHEET, TABLES_TITLE, write_tables
 from latbook.workbook.templates import all_templates, reference_tables
 
 SPEC_CHUNK = 30000
@@ -152,9 +152,10 @@ def _write(spec, results, placed, registry, tmp, spec_json, spec_sha256, protect
     header = _page_header(spec)
 
     cover = wb.add_worksheet(COVER_SHEET)
-    last = write_cover(cover, spec, spec_sha256, styles, results)
+    last, toc_rows = write_cover(cover, spec, spec_sha256, styles, results, contents(plans))
     _write_group(cover, groups[COVER_SHEET], registry, results, styles)
     _fix_row_heights(cover, last)
+    pages_of = {COVER_SHEET: _sheet_pages(cover, last, _cover_scale(cover))}
     _finish_sheet(cover, header, SheetPages(last_row=last), COVER_LAST_COL, protect)
     if _cover_scale(cover) < 1.0:
         # cover.py's columns are a little wider than the page where LibreOffice prints with
@@ -170,6 +171,7 @@ def _write(spec, results, placed, registry, tmp, spec_json, spec_sha256, protect
         _write_plan(ws, plan, pages, registry, values, styles, caution)
         _write_charts(wb, ws, plan, registry)
         _finish_sheet(ws, header, pages, LAST_GRID_COL, protect)
+        pages_of[plan.name] = pages.pages
 
     for name, qid in sorted(registry.names.items()):
         entry = registry.entries[qid]
@@ -178,6 +180,8 @@ def _write(spec, results, placed, registry, tmp, spec_json, spec_sha256, protect
     tables = wb.add_worksheet(TABLES_SHEET)
     last = write_tables(wb, tables, reference_tables(), styles)
     _finish_sheet(tables, header, SheetPages(last_row=last), TABLES_LAST_COL, protect)
+    pages_of[TABLES_SHEET] = _sheet_pages(tables, last)
+    write_contents_pages(cover, toc_rows, pages_of, styles)
 
     index = wb.add_worksheet(INDEX_SHEET)
     last = write_index(index, registry, styles)
@@ -229,6 +233,15 @@ def plan_pages(plan: SheetPlan, results: Mapping[str, Any], caution: str) -> She
     return paginate(plan, row_heights(plan, results, title_cells(plan, caution)))
 
 
+def contents(plans: list[SheetPlan]) -> list[tuple[str, str]]:
+    """The printed sheets in print order with what each holds (the Cover's contents)."""
+    return [
+        (COVER_SHEET, "Project, criteria, revisions, seal, choices and cautions"),
+        *((plan.name, plan.title) for plan in plans),
+        (TABLES_SHEET, TABLES_TITLE),
+    ]
+
+
 def page_counts(spec: Spec, results: Mapping[str, Any]) -> dict[str, int]:
     """Printed pages of each printed sheet, in print order (Cover, calc sheets, Tables), as
     the layout determines them; for a table of contents with page numbers."""
@@ -236,10 +249,10 @@ def page_counts(spec: Spec, results: Mapping[str, Any]) -> dict[str, int]:
     counts: dict[str, int] = {}
     scratch = xlsxwriter.Workbook(None, {"in_memory": True})
     styles = Styles(scratch)
-    cover = scratch.add_worksheet(COVER_SHEET)
-    last = write_cover(cover, spec, "0" * 64, styles, results)
-    counts[COVER_SHEET] = _sheet_pages(cover, last, _cover_scale(cover))
     sheet_plans = [p for p in plans if isinstance(p, SheetPlan)]
+    cover = scratch.add_worksheet(COVER_SHEET)
+    last, _ = write_cover(cover, spec, "0" * 64, styles, results, contents(sheet_plans))
+    counts[COVER_SHEET] = _sheet_pages(cover, last, _cover_scale(cover))
     values = printed_values(sheet_plans, results)
     for plan in sheet_plans:
         counts[plan.name] = plan_pages(plan, values, caution_line(spec)).pages

@@ -47,6 +47,7 @@ CHARS_WIDE_NOTE = 85  # columns B-E, 8 pt
 CHARS_LABEL = 26  # column A, 10 pt bold
 CHARS_BASIS_NOTE = 54  # columns D-E, 8 pt
 CHARS_DESCRIPTION = 30  # columns C-D, 10 pt
+CHARS_CONTENTS = 44  # columns B-D, 10 pt
 CHARS_NARROW = 15  # column B or E alone, 10 pt
 CHARS_FULL = 90  # columns A-E, 10 pt
 CHARS_MARK = 70  # columns A-E, 12 pt bold
@@ -74,8 +75,11 @@ def write_cover(
     spec_sha256: str,
     styles: Styles,
     results: dict[str, Any] | None = None,
-) -> int:
-    """Write the Cover's text, rows and frames; returns the last row used. The formula cells
+    contents: list[tuple[str, str]] | None = None,
+) -> tuple[int, dict[str, int]]:
+    """Write the Cover's text, rows and frames; returns the last row used and the row of
+    each sheet in the table of contents (`contents`: printed sheets and titles, in print
+    order; the builder writes their pages once the pages are counted). The formula cells
     (input check, criteria values) are written after it by the builder."""
     for col, width in enumerate(COVER_WIDTHS):
         ws.set_column(col, col, width)
@@ -90,6 +94,7 @@ def write_cover(
     _write_seal_block(ws, styles)
     row = _write_criteria(ws, spec, styles, results)
     row = _write_revisions(ws, spec, styles, row + 1)
+    row, toc_rows = _write_contents(ws, contents or [], styles, row + 1)
     row = _write_basis(ws, spec, styles, row + 1)
     if results is not None and spec.wall_lines:
         row = _write_choices(ws, spec, results, styles, row + 1)
@@ -100,7 +105,46 @@ def write_cover(
         ws.merge_range(row, COL_LABEL, row, COL_LAST, line, styles.get("cover_warning"))
         ws.set_row(row, _height(line, CHARS_FULL - 8) + 4)
         row += 1
-    return row - 1
+    return row - 1, toc_rows
+
+
+def _write_contents(
+    ws: Worksheet, contents: list[tuple[str, str]], styles: Styles, row: int
+) -> tuple[int, dict[str, int]]:
+    """The table of contents: each printed sheet, what it holds and its pages (left blank
+    here; `write_contents_pages` fills them). Returns the last row and each sheet's row."""
+    rows: dict[str, int] = {}
+    if not contents:
+        return row, rows
+    row += 1
+    ws.write_string(row, COL_LABEL, "Contents", styles.get("cover_heading"))
+    row += 1
+    th = styles.get("cover_th")
+    ws.write_string(row, COL_LABEL, "Sheet", th)
+    ws.merge_range(row, COL_VALUE, row, COL_BASIS, "Contents", th)
+    ws.write_string(row, COL_LAST, "Pages", th)
+    cell = styles.get("cover_value")
+    for name, title in contents:
+        row += 1
+        rows[name] = row
+        ws.write_string(row, COL_LABEL, name, cell)
+        ws.merge_range(row, COL_VALUE, row, COL_BASIS, title, cell)
+        ws.set_row(row, max(_height(name, CHARS_LABEL), _height(title, CHARS_CONTENTS)))
+    return row, rows
+
+
+def write_contents_pages(
+    ws: Worksheet, rows: dict[str, int], pages: dict[str, int], styles: Styles
+) -> None:
+    """Each sheet's page numbers in the table of contents: the printout numbers its pages
+    on from sheet to sheet, in print order (`pages`: the count of each printed sheet)."""
+    first = 1
+    for name, count in pages.items():
+        if name in rows:
+            last = first + count - 1
+            text = str(first) if count == 1 else f"{first}–{last}"
+            ws.write_string(rows[name], COL_LAST, text, styles.get("cover_value"))
+        first += count
 
 
 def _height(text: str, chars_per_line: int, size_pt: int = 10) -> float:

@@ -20,6 +20,7 @@ from latbook.workbook.print_grid import (
 from latbook.workbook.registry import a1
 from latbook.workbook.styles import Styles, font_of
 
+TABLES_TITLE = "Reference tables (ASCE 7-16, AWC SDPWS-2015)"
 TABLES_SHEET = "Tables"
 # Print grid of this sheet (Excel width units): row labels, then up to 8 value columns; fits
 # US letter landscape at 100 % (print_grid.col_width_pt).
@@ -32,7 +33,7 @@ def write_tables(wb: Workbook, ws: Worksheet, tables: dict[str, Any], styles: St
     ws.set_column(0, 0, LABEL_WIDTH)
     ws.set_column(1, VALUE_COLS, VALUE_WIDTH)
     heights: dict[int, float] = {}
-    _full_width(ws, 0, "Reference tables (ASCE 7-16, AWC SDPWS-2015)", "title", styles, heights)
+    _full_width(ws, 0, TABLES_TITLE, "title", styles, heights)
     row = 2
     for table in tables.values():
         row = _write_table(wb, ws, table, row, styles, heights) + 1
