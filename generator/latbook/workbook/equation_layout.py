@@ -134,9 +134,11 @@ def _scalar_equation(plan: SheetPlan, cell: Cell, index: _Index, registry: Regis
 
 
 def column_equation(spec: ColumnEquation, index: _Index, registry: Registry) -> str | None:
-    """A table column's equation in symbols ("= Cvx·V_base"), or None."""
+    """A table column's equation in symbols ("F_x = C_vx·V"), or None. Never starts with
+    "=", so no reader takes the text for a formula."""
+    head = index.column.get((spec.table, spec.field), spec.field)
     if spec.equation:
-        return spec.equation if spec.equation.startswith("=") else "= " + spec.equation
+        return f"{head} = {spec.equation.lstrip('= ')}"
     if spec.formula is None:
         return None
 
@@ -146,7 +148,7 @@ def column_equation(spec: ColumnEquation, index: _Index, registry: Registry) -> 
     rendering = render_arithmetic(spec.formula, resolve)
     if rendering is None:
         return None
-    return "= " + rendering.symbols
+    return f"{head} = {rendering.symbols}"
 
 
 def _resolve(
