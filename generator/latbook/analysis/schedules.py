@@ -1,6 +1,7 @@
-"""The Schedules sheet: shear-wall assemblies, hold-downs and collectors gathered from the
-calculation results (no new engineering: the sheet collects what the walls and diaphragm
-sheets computed, AWC SDPWS-2015 §4.3.6.4.2 and ASCE 7-16 §12.10.2)."""
+"""The Schedules sheet: shear-wall assemblies, hold-downs, collectors and foundation
+reactions gathered from the calculation results (no new engineering: the sheet collects what
+the walls, diaphragm and Found sheets computed, AWC SDPWS-2015 §4.3.6.4.2 and ASCE 7-16
+§12.10.2)."""
 
 from __future__ import annotations
 
@@ -8,6 +9,7 @@ from typing import Any
 
 from latbook.spec.models import Spec
 from latbook.spec.schedule_rows import schedule_collections
+from latbook.spec.wall_stories import wall_stories
 
 NOT_GIVEN = "not given"
 NO_UPLIFT = "no uplift"
@@ -45,6 +47,7 @@ def schedule_results(spec: Spec, out: dict[str, Any]) -> None:
             out[f"{base}.ratio"] = T / capacity
         else:
             out[f"{base}.ratio"] = NOT_GIVEN if T > 0 else NO_UPLIFT
+    _foundation_schedule(spec, out)
     caps = {a.id: a.collector_capacity_lb for a in spec.assemblies.diaphragms}
     for r in rows["sched_collectors"]:
         base = f"sched.coll.{r['ckey']}"
@@ -55,3 +58,14 @@ def schedule_results(spec: Spec, out: dict[str, Any]) -> None:
         capacity = caps.get(r["assembly"])
         out[f"{base}.capacity_lb"] = NOT_GIVEN if capacity is None else capacity
         out[f"{base}.ratio"] = out[f"{line_base}.coll_dcr"]
+
+
+def _foundation_schedule(spec: Spec, out: dict[str, Any]) -> None:
+    """Per bottom-story segment: the larger seismic or wind shear, uplift and compression
+    the foundation receives (the Found sheet's design-level values)."""
+    base_story = wall_stories(spec)[-1]
+    for seg in base_story.segments:
+        found = f"found.{seg.key}"
+        for name in ("V", "T", "C"):
+            values = [out[k] for k in (f"{found}.{name}_seis", f"{found}.{name}_wind") if k in out]
+            out[f"sched.found.{seg.key}.{name}"] = max(values)
