@@ -23,6 +23,7 @@ from latbook.build import build_workbook, check_spec, spec_digest
 from latbook.cli import main
 from latbook.recalc import convert_to_pdf, pdf_page_count
 from latbook.workbook.builder import SPEC_SHEET, page_counts
+from latbook.workbook.layout import TABLE_HEADER_ROWS
 
 DEMO = Path(__file__).resolve().parents[1] / "out_examples/maple_terrace/spec.json"
 
@@ -102,11 +103,11 @@ def test_print_setup_on_every_sheet(demo, book):
         assert header.center.text == "&A", ws.title
         assert project["revision"] in header.right.text and project["date"] in header.right.text
         assert "Page &P of &N" in ws.oddFooter.center.text, ws.title
-    # A repeated range is one table chunk's three header rows: header, unit, clause.
+    # A repeated range is one table chunk's four header rows: header, unit, clause, equation.
     for ws in _printed_sheets(book):
         if ws.print_title_rows:
             top, bottom = (int(x) for x in ws.print_title_rows.replace("$", "").split(":"))
-            assert bottom - top == 2, ws.title
+            assert bottom - top == TABLE_HEADER_ROWS - 1, ws.title
 
 
 def _chart_value_refs(path: Path) -> set[str]:

@@ -84,7 +84,8 @@ def write_cover(
     for col, width in enumerate(COVER_WIDTHS):
         ws.set_column(col, col, width)
     ws.set_row(0, TITLE_PT)
-    ws.write_string(0, 0, "Lateral force-resisting system calculation", styles.get("title"))
+    title = "Lateral force-resisting system calculation"
+    ws.merge_range(0, 0, 0, COL_LAST, title, styles.get("title"))  # one line across the page
     _write_caution_line(ws, spec, styles)
     row = _write_fields(ws, spec, spec_sha256, styles)
     if row != COVER_STATUS_ROW:
