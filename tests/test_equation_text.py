@@ -32,6 +32,7 @@ from latbook.workbook_functions import TEXT_FORMATS
 from tests.helpers.evaluator import evaluate_workbook
 
 DEMO = Path(__file__).resolve().parents[1] / "out_examples" / "maple_terrace" / "spec.json"
+CEDAR = DEMO.parents[1] / "cedar_row" / "spec.json"
 
 # invented names for the unit cases, shaped like ASCE 7-16 Eq. 12.8-2 (Cs = SDS / (R / Ie))
 SYMBOLS = {
@@ -197,7 +198,8 @@ def test_issue_example_line_on_the_seismic_sheet(demo_layout):
 def test_built_equations_cached_as_the_formulas_package_computes(tmp_path):
     """Cached text == the `formulas` package's recomputation, except where a value sits on
     an exact decimal half (the package rounds the binary value half to even)."""
-    built = build_workbook(json.loads(DEMO.read_text(encoding="utf-8")), tmp_path / "c.xlsx")
+    # cedar_row: the smaller two-story example (the demo takes twice as long to evaluate)
+    built = build_workbook(json.loads(CEDAR.read_text(encoding="utf-8")), tmp_path / "c.xlsx")
     wb = openpyxl.load_workbook(built.path, data_only=True)
     formulas_wb = openpyxl.load_workbook(built.path)
     evaluated = evaluate_workbook(built.path)
@@ -214,7 +216,7 @@ def test_built_equations_cached_as_the_formulas_package_computes(tmp_path):
             assert got == cached or _half_step_apart(got, cached), f"{ws.title}!{cell.coordinate}"
             checked += 1
             ties += got != cached
-    assert checked > 300
+    assert checked > 150  # cedar_row prints 191 equations (counted when they were added)
     assert ties <= 5  # e.g. Cp = -0.5125 at "0.000": LibreOffice -0.513, formulas -0.512
 
 

@@ -12,6 +12,7 @@ import math
 from typing import Any
 
 MAX_WIDTH_PX = 640  # inside the print grid's 689 Excel pixels (builder.CHART_WIDTH_PX)
+MAX_HEIGHT_PX = 540  # with the sheet's title rows, within a landscape page (484 pt)
 MAX_INNER_HEIGHT_PX = 420  # with titles, axis and legend: within a landscape page (484 pt)
 MIN_WIDTH_PX = 420
 MARGIN_LEFT_PX, MARGIN_RIGHT_PX, MARGIN_TOP_PX = 70, 30, 44
@@ -39,7 +40,14 @@ def plan_frame(plan: dict[str, float], legend_entries: int) -> dict[str, Any]:
     lo_x, hi_x = math.floor((x0 - pad) / step) * step, math.ceil((x1 + pad * 0.5) / step) * step
     lo_y, hi_y = math.floor((y0 - pad) / step) * step, math.ceil((y1 + pad * 0.5) / step) * step
     inner_w_max = MAX_WIDTH_PX - MARGIN_LEFT_PX - MARGIN_RIGHT_PX
-    px_per_ft = min(inner_w_max / (hi_x - lo_x), MAX_INNER_HEIGHT_PX / (hi_y - lo_y))
+    # the whole chart stays on one page under the sheet's title: the legend's rows (at the
+    # narrowest width, the most rows) come out of the plot's height
+    worst_rows = -(-legend_entries // max(1, (MIN_WIDTH_PX - 40) // LEGEND_ENTRY_PX))
+    inner_h_max = min(
+        MAX_INNER_HEIGHT_PX,
+        MAX_HEIGHT_PX - MARGIN_TOP_PX - AXIS_BELOW_PX - LEGEND_ROW_PX * worst_rows - 16,
+    )
+    px_per_ft = min(inner_w_max / (hi_x - lo_x), inner_h_max / (hi_y - lo_y))
     inner_w, inner_h = (hi_x - lo_x) * px_per_ft, (hi_y - lo_y) * px_per_ft
     width = max(MIN_WIDTH_PX, round(inner_w + MARGIN_LEFT_PX + MARGIN_RIGHT_PX))
     per_row = max(1, (width - 40) // LEGEND_ENTRY_PX)
