@@ -171,13 +171,35 @@ def _cmd_results(args: argparse.Namespace) -> int:
     from latbook.build import check_spec
     from latbook.spec.load import load_json
 
-    _, results = check_spec(load_json(args.spec))
+    spec, results = check_spec(load_json(args.spec))
     if args.json:
         print(json.dumps(results, indent=2, sort_keys=True))
-    else:
-        for key in sorted(results):
-            print(f"{key} = {results[key]}")
+        return EXIT_OK
+    units = quantity_units(spec)
+    for key in sorted(results):
+        unit = units.get(key, "")
+        print(f"{key} = {plain_value(results[key])}" + (f" {unit}" if unit else ""))
     return EXIT_OK
+
+
+RESULT_DIGITS = 10
+"""Significant digits `results` prints: enough for any engineering figure, none of the
+binary noise of a float (0.45999999999999996 prints as 0.46)."""
+
+
+def plain_value(value: object) -> str:
+    """A result as an engineer reads it: floats to RESULT_DIGITS significant digits."""
+    if isinstance(value, float):
+        return f"{value:.{RESULT_DIGITS}g}"
+    return str(value)
+
+
+def quantity_units(spec) -> dict[str, str]:
+    """Unit of every quantity the workbook shows, by quantity id (its layout's registry)."""
+    from latbook.workbook.builder import layout
+
+    _, registry = layout(spec)
+    return {e.id: e.unit for e in registry.entries.values() if e.unit and e.unit != "-"}
 
 
 COMMANDS = {
