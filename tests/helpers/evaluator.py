@@ -27,6 +27,7 @@ from pathlib import Path
 import formulas
 import numpy as np
 import openpyxl
+import openpyxl.worksheet._reader
 import schedula
 from formulas.tokens.operand import XlError
 
@@ -92,9 +93,33 @@ def _exclusive(lock_path: Path) -> Iterator[None]:
             fcntl.flock(handle, fcntl.LOCK_UN)
 
 
+@contextlib.contextmanager
+def _merged_ranges_left_unbound() -> Iterator[None]:
+    """While `formulas` reads the file, openpyxl does not bind merged ranges.
+
+    Binding gives each range's border cells their styles and turns the cells under a range
+    into empty MergedCells; the file already holds those cells blank (xlsxwriter writes a
+    merged range as its first cell plus blank styled cells), so the values read are the
+    same (checked: identical results for harbor_workshop) and the load is about a third
+    faster.
+    """
+    reader = openpyxl.worksheet._reader.WorksheetReader
+    original = reader.__dict__.get("bind_merged_cells")
+    if original is None:  # another openpyxl: read as it reads
+        yield
+        return
+    reader.bind_merged_cells = lambda self: None
+    try:
+        yield
+    finally:
+        reader.bind_merged_cells = original
+
+
 def _evaluate(path: Path) -> dict[tuple[str, str], object]:
     sheet_by_upper_name = _sheet_names_by_upper_name(path)
-    model = formulas.ExcelModel().loads(str(path)).finish()
+    with _merged_ranges_left_unbound():
+        model = formulas.ExcelModel().loads(str(path))
+    model.finish()
     solution = model.calculate()
 
     values: dict[tuple[str, str], object] = {}
