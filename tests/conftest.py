@@ -7,6 +7,7 @@ import os
 import pytest
 
 from latbook.recalc import find_soffice
+from tests.helpers import evaluator
 
 
 def pytest_configure(config: pytest.Config) -> None:
@@ -29,3 +30,17 @@ def soffice() -> str:
             pytest.fail(f"{SOFFICE_MISSING_REASON} -- CI must run them")
         pytest.skip(SOFFICE_MISSING_REASON)
     return path
+
+
+# --- The `formulas` package's results, once per workbook and test run --------------------
+
+
+@pytest.fixture(scope="session", autouse=True)
+def formulas_results_cache(tmp_path_factory: pytest.TempPathFactory):
+    """A folder shared by every worker of this run (pytest-xdist workers' temp folders sit in
+    the run's folder), where tests/helpers/evaluator.py keeps each workbook's results."""
+    base = tmp_path_factory.getbasetemp()
+    run_folder = base.parent if os.environ.get("PYTEST_XDIST_WORKER") else base
+    evaluator.use_cache(run_folder / "formulas-results")
+    yield
+    evaluator.use_cache(None)

@@ -558,7 +558,7 @@ def test_text_fields_land_as_literal_text(text, tmp_path):
     spec["seismic"]["system"]["label"] = text
     out = tmp_path / "calc.xlsx"
     build_workbook(spec, out)
-    wb = openpyxl.load_workbook(out)
+    wb = openpyxl.load_workbook(out, read_only=True)  # values and types; no merged-range binding
     hits = [
         (ws.title, cell.coordinate, cell.data_type)
         for ws in wb.worksheets

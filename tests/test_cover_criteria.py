@@ -39,7 +39,7 @@ def _data(name: str = "maple_terrace") -> dict:
 
 
 def _cover_cells(path: Path, data_only: bool) -> dict[str, object]:
-    wb = openpyxl.load_workbook(path, data_only=data_only)
+    wb = openpyxl.load_workbook(path, data_only=data_only, read_only=True)
     try:
         ws = wb[COVER_SHEET]
         return {c.coordinate: c.value for row in ws.iter_rows() for c in row if c.value is not None}
@@ -48,7 +48,7 @@ def _cover_cells(path: Path, data_only: bool) -> dict[str, object]:
 
 
 def _value(path: Path, entry, data_only: bool):
-    wb = openpyxl.load_workbook(path, data_only=data_only)
+    wb = openpyxl.load_workbook(path, data_only=data_only, read_only=True)
     try:
         return wb[entry.sheet].cell(entry.row + 1, entry.col + 1).value
     finally:

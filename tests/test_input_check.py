@@ -44,7 +44,7 @@ def _edited(demo, tmp_path: Path, edits: dict[str, object]) -> Path:
 
 def _cover(path: Path, data_only: bool, demo) -> tuple[object, object]:
     """(status, count) cells of the Cover: formulas or the values stored."""
-    wb = openpyxl.load_workbook(path, data_only=data_only)
+    wb = openpyxl.load_workbook(path, data_only=data_only, read_only=True)
     try:
         return tuple(
             wb[e.sheet].cell(e.row + 1, e.col + 1).value

@@ -45,6 +45,21 @@ FIXED_CASES = [
 ]
 
 
+def fixed_spec(case_id: str) -> dict:
+    """The spec of a FIXED_CASES entry by its test id ("seed12-1lv-2ln")."""
+    for seed, n_levels, n_lines, seismic, wind, method in FIXED_CASES:
+        if f"seed{seed}-{n_levels}lv-{n_lines}ln" == case_id:
+            return make_spec(
+                random.Random(seed),
+                n_levels,
+                n_lines,
+                seismic=seismic,
+                wind=wind,
+                design_method=method,
+            )
+    raise KeyError(case_id)
+
+
 def assert_parity(spec: dict, out: Path) -> None:
     """Build `spec` to `out`, recompute it, and check all three agree with no error value."""
     result = build_workbook(spec, out)
@@ -62,9 +77,8 @@ def assert_parity(spec: dict, out: Path) -> None:
     ids=[f"seed{c[0]}-{c[1]}lv-{c[2]}ln" for c in FIXED_CASES],
 )
 def test_fixed_generated_building_parity(seed, n_levels, n_lines, seismic, wind, method, tmp_path):
-    spec = make_spec(
-        random.Random(seed), n_levels, n_lines, seismic=seismic, wind=wind, design_method=method
-    )
+    spec = fixed_spec(f"seed{seed}-{n_levels}lv-{n_lines}ln")
+    assert (len(spec["building"]["levels"]), spec["design_method"]) == (n_levels, method)
     assert_parity(spec, tmp_path / "calc.xlsx")
 
 

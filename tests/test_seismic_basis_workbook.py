@@ -30,14 +30,20 @@ def cedar(tmp_path_factory):
 
 
 def _cells(path: Path, sheet: str) -> list:
-    book = openpyxl.load_workbook(path, data_only=True)
-    return [c.value for row in book[sheet].iter_rows() for c in row if c.value is not None]
+    book = openpyxl.load_workbook(path, data_only=True, read_only=True)
+    try:
+        return [c.value for row in book[sheet].iter_rows() for c in row if c.value is not None]
+    finally:
+        book.close()
 
 
 def _value(built, qid: str):
     e = built.registry.entries[qid]
-    book = openpyxl.load_workbook(built.path, data_only=True)
-    return book[e.sheet].cell(row=e.row + 1, column=e.col + 1).value
+    book = openpyxl.load_workbook(built.path, data_only=True, read_only=True)
+    try:
+        return book[e.sheet].cell(row=e.row + 1, column=e.col + 1).value
+    finally:
+        book.close()
 
 
 def test_tables_print_see_11_4_8_where_the_standard_has_no_value(cedar):

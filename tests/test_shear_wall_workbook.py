@@ -3,23 +3,22 @@ engine (parity), and the recomputed numbers obey statics and the trade facts nam
 
 The specs are the demo building (invented data) with loads and lengths changed to reach
 the cases: a segment whose dead load holds it down, one with net uplift stacked over three
-stories, a segment past 2:1 (k = 2bs/h) and one past 3.5:1 (not a shear wall).
+stories, a segment past 2:1 (k = 2bs/h) and one past 3.5:1 (not a shear wall). Each keeps
+only the wall lines its checks read plus two lines the other way (the stacked case all three
+stories, the narrow one two: tests/helpers/demo_variants.py), which halves the `formulas`
+package's work; the full demo is recomputed by tests/test_parity_examples.py.
 """
 
 from __future__ import annotations
-
-import copy
-import json
-from pathlib import Path
 
 import pytest
 
 from latbook.build import build_workbook
 from latbook.workbook.registry import a1
+from tests.helpers.demo_variants import demo_with_lines
 from tests.helpers.evaluator import evaluate_workbook
 from tests.helpers.parity import compare, formula_errors
 
-DEMO = Path(__file__).resolve().parents[1] / "out_examples/maple_terrace/spec.json"
 STORIES_TOP_DOWN = ("RF", "L3", "L2")
 WALL_FT = 9.25  # the demo's sheathed wall height in every story (10.5 ft stories)
 REL = 1e-9
@@ -31,7 +30,7 @@ def _segments(data, line_id):
 
 
 def _stacked_uplift_spec() -> dict:
-    data = json.loads(DEMO.read_text())
+    data = demo_with_lines(("A", "C", "1", "3"))  # three stories
     for _, seg in _segments(data, "A"):
         if seg["id"] == "A1":
             seg["dead_load_plf"] = 4000.0  # holds the segment down in every story
@@ -41,8 +40,7 @@ def _stacked_uplift_spec() -> dict:
 
 
 def _narrow_segments_wind_lrfd_spec() -> dict:
-    data = json.loads(DEMO.read_text())
-    data = copy.deepcopy(data)
+    data = demo_with_lines(("B", "C", "1", "3"), stories=2)
     del data["seismic"]
     data["design_method"] = "LRFD"
     for level, seg in _segments(data, "B"):
