@@ -171,7 +171,8 @@ def test_overhang_moment_moves_load_to_its_line():
     assert r["diaph.RF.y.line.M.trib_ft"] == pytest.approx(38.0 - 64.0 / 72.0, rel=1e-12)
     # SDPWS-2015 §4.2.5.2 (from memory): 8 ft <= 25 ft; 8 / 50 = 0.16 <= 1.0 (one story)
     assert r["diaph.RF.y.cant.3.dcr"] == pytest.approx(max(8.0 / 25.0, 0.16 / 1.0), rel=1e-12)
-    assert r["summary.cantilever.RF.y.status"] == "limits ok; edge drift not checked"
+    # harbor gives the deflection inputs (demo values): the edge drift is checked too
+    assert r["summary.cantilever.RF.y.status"] == "ok"
 
 
 # --- 5. collectors -----------------------------------------------------------------------------

@@ -329,6 +329,7 @@ def _assemblies(rng, ids: _IdMaker) -> dict[str, list[dict[str, Any]]]:
         if rng.random() < 0.5:
             diaphragms[-1]["chord_capacity_lb"] = _r(rng.uniform(4000, 40000), 0)
             diaphragms[-1]["collector_capacity_lb"] = _r(rng.uniform(4000, 40000), 0)
+        _deflection_inputs(random.Random(vs * 7919 + i), diaphragms[-1])
     walls = []
     for i in range(rng.randint(1, 4)):
         vs = _r(rng.uniform(300, 2500), 0)
@@ -356,6 +357,24 @@ FACE_2_SHEATHING = (
     "gypsum_board_unblocked",
     "wsp_unblocked",
 )
+
+
+def _deflection_inputs(side: random.Random, diaphragm: dict[str, Any]) -> None:
+    """Invented SDPWS-2015 Eq. 4.2-1 inputs on about half the assemblies (a separate stream,
+    seeded from values already drawn, so the rest of a generated spec is unchanged); now and
+    then one input is left out (the deflection is then "not computed")."""
+    if side.random() < 0.5:
+        return
+    values = {
+        "Ga_kips_per_in": _r(side.uniform(6, 40), 1),
+        "chord_E_psi": side.choice((1.2e6, 1.4e6, 1.6e6, 1.8e6)),
+        "chord_A_in2": side.choice((10.5, 16.5, 24.75, 33.0)),
+        "chord_splice_slip_in": side.choice((0.0, 0.02, 0.03, _r(side.uniform(0, 0.1), 3))),
+        "chord_splice_spacing_ft": _r(side.uniform(8, 40), 1),
+    }
+    if side.random() < 0.2:
+        del values[side.choice(sorted(values))]
+    diaphragm.update(values)
 
 
 def _sheathing(side: random.Random, wall: dict[str, Any]) -> None:

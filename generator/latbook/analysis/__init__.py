@@ -14,6 +14,7 @@ from latbook.analysis.criteria import criteria_results
 from latbook.analysis.diaphragm import diaphragm_results
 from latbook.analysis.foundation import foundation_results
 from latbook.analysis.inputs import input_results
+from latbook.analysis.overhang_drift import overhang_drift_results
 from latbook.analysis.plans import plan_results
 from latbook.analysis.schedules import schedule_results
 from latbook.analysis.seismic import seismic_results
@@ -37,6 +38,7 @@ STEPS = [
     shear_wall_results,
     foundation_results,
     drift_results,
+    overhang_drift_results,
     summary_results,
     schedule_results,
     criteria_results,

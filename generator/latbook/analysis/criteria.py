@@ -8,6 +8,8 @@ from dataclasses import dataclass
 from typing import Any
 
 from latbook.spec.models import Spec
+from latbook.spec.overhangs import overhangs
+from latbook.spec.plan_geometry import DIRECTIONS
 
 COVER_PREFIX = "cover."
 
@@ -19,6 +21,11 @@ FLEXIBLE_DIAPHRAGMS = (
     "flexible: every diaphragm is analysed as flexible, its load shared by the wall lines by "
     "tributary area (the engineer confirms the idealization, ASCE 7-16 §12.3.1); overhangs "
     "continuous over their line"
+)
+DEFLECTION_BASIS = (
+    "SDPWS-2015 Eq. 4.2-1 per span, the cantilever form for overhangs, at strength-level "
+    "unit shear (F_px; W); computed where the diaphragm assembly gives Ga, chord E and A, "
+    "splice slip and spacing, otherwise 'not computed' and the checks that need it 'not checked'"
 )
 NO_WALLS = "none: the spec has no wall lines, so only the loads are calculated"
 RHO_BASIS = {
@@ -65,8 +72,30 @@ def criteria_rows(spec: Spec) -> list[CriteriaRow]:
     rows.append(CriteriaRow("Diaphragms and walls", heading=True))
     if spec.wall_lines:
         rows.append(CriteriaRow("Diaphragms", text=FLEXIBLE_DIAPHRAGMS, wide=True))
+        rows.append(CriteriaRow("Diaphragm deflection", text=DEFLECTION_BASIS, wide=True))
+        rows += _overhang_rows(spec)
     else:
         rows.append(CriteriaRow("Diaphragms and walls", text=NO_WALLS, wide=True))
+    return rows
+
+
+def _overhang_rows(spec: Spec) -> list[CriteriaRow]:
+    """The outcome of each overhang's edge-drift check (SDPWS-2015 §4.2.5.2), live."""
+    rows = []
+    for level in sorted(spec.building.levels, key=lambda lv: -lv.elevation_ft):
+        for d in DIRECTIONS:
+            for oh in overhangs(spec, level.id, d):
+                n = oh.span.number
+                rows.append(
+                    _live(
+                        f"Story drift at the overhang edge, level {level.id}, load in {d}, "
+                        f"{oh.span.label}",
+                        f"overhang.{level.id}.{d}.{n}",
+                        f"diaph.{level.id}.{d}.cant.{n}.edge_status",
+                        "",
+                        f"SDPWS-2015 §4.2.5.2 (Dia_{level.id}_{d})",
+                    )
+                )
     return rows
 
 

@@ -29,8 +29,8 @@ def drift_basis(source: str, spec: Spec) -> str:
     return f"serviceability wind {factor} x W (force-driven part; ASCE 7-16 App. C)"
 
 
-CANTILEVER_OK = "limits ok; edge drift not checked"
-CANTILEVER_BASIS_TEXT = "geometry, SDPWS-2015 §4.2.5.2"
+CANTILEVER_OPEN = "limits ok; edge drift not checked: deflection inputs not given"
+CANTILEVER_BASIS_TEXT = "geometry and edge drift, SDPWS-2015 §4.2.5.2"
 
 
 def combination_text(item: SummaryItem, out: dict[str, Any], spec: Spec) -> str:
@@ -60,7 +60,13 @@ def _element_and_values(item: SummaryItem, out: dict[str, Any]) -> tuple[str, An
         return f"level {item.level} spans, load in {item.dir}", "-", out[f"{base}.ar_dcr"]
     if item.kind == "cantilever":
         prefix = f"diaph.{item.level}.{item.dir}.cant."
-        dcr = max(v for k, v in out.items() if k.startswith(prefix) and k.endswith(".dcr"))
+        dcr = max(
+            v
+            for k, v in out.items()
+            if k.startswith(prefix)
+            and (k.endswith(".dcr") or k.endswith(".edge_dcr"))
+            and not isinstance(v, str)
+        )
         return f"level {item.level} overhang, load in {item.dir}", "-", dcr
     if item.kind == "wall":
         lv, src = item.level, item.source
@@ -72,6 +78,12 @@ def _element_and_values(item: SummaryItem, out: dict[str, Any]) -> tuple[str, An
     if item.kind == "hold_down":
         return _hold_down_row(item.level, item.source, out)
     return out[f"drift.gov_{item.source}"], "-", out[f"drift.dcr_{item.source}_max"]
+
+
+def _edges_open(item: SummaryItem, out: dict[str, Any]) -> bool:
+    """True where some overhang of the row's diaphragm has no edge-drift check."""
+    prefix = f"diaph.{item.level}.{item.dir}.cant."
+    return any(v for k, v in out.items() if k.startswith(prefix) and k.endswith(".edge_open"))
 
 
 def _hold_down_row(lv: str, src: str, out: dict[str, Any]) -> tuple[str, Any, Any]:
@@ -98,6 +110,13 @@ MINIMUM_WIND_BASIS = (
     "as its own case to every element"
 )
 CANTILEVER_BASIS = "Diaphragm overhangs: SDPWS-2015 §4.2.5.2 limits; deflections shown tolerable: "
+CANTILEVER_EDGE = "; story drift at the overhang edge: see the Dia sheets"
+DEFLECTION_BASIS = (
+    "Diaphragm deflection: SDPWS-2015 Eq. 4.2-1 per span (overhangs: the cantilever form, "
+    "fixed at the line), v at strength level (F_px seismic, governing W wind), splice slip as "
+    "an upper bound for splices at most s apart; not computed where an assembly lacks Ga, "
+    "chord E and A, splice slip or spacing"
+)
 SHEATHING_BASIS = (
     "Aspect ratios and factors by sheathing (SDPWS-2015 Table 4.3.4, §4.3.4, Table 4.2.4; values "
     "from memory): a segment past the limit of its face 1 is not a shear wall (listed below); two "
@@ -175,10 +194,9 @@ def design_choices(spec: Spec, out: dict[str, Any]) -> dict[str, str]:
         )
         texts["wind_service"] = WIND_SERVICE_BASIS
     texts["end_posts"] = END_POST_BASIS
+    texts["dia_deflection"] = DEFLECTION_BASIS
     tolerated = "yes" if spec.diaphragms.cantilever_deflection_tolerated else "no"
-    texts["cantilever"] = (
-        CANTILEVER_BASIS + tolerated + "; story drift at the overhang edge not checked"
-    )
+    texts["cantilever"] = CANTILEVER_BASIS + tolerated + CANTILEVER_EDGE
     return texts
 
 
@@ -230,7 +248,9 @@ def summary_results(spec: Spec, out: dict[str, Any]) -> None:
         if isinstance(dcr, str):
             status = NO_CAPACITY
         else:
-            ok = CANTILEVER_OK if item.kind == "cantilever" else OK
+            ok = OK
+            if item.kind == "cantilever" and _edges_open(item, out):
+                ok = CANTILEVER_OPEN
             status = FAILS if dcr > 1 else ok
             dcrs.append(dcr)
         source_text = SOURCE_TEXT.get(item.source, "seismic or wind, governing")

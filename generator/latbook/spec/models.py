@@ -403,6 +403,28 @@ class DiaphragmAssembly(_Strict):
         description="Collector (drag strut) axial capacity at the design method's level, lb; "
         "optional, gives a collector demand/capacity ratio.",
     )
+    Ga_kips_per_in: Annotated[float, Field(gt=0, le=500)] | None = Field(
+        None,
+        description="Apparent diaphragm shear stiffness Ga, kips/in (AWC SDPWS-2015 Tables "
+        "4.2A-C, §4.2.2); optional, with the chord and splice inputs gives the diaphragm "
+        "deflection (Eq. 4.2-1).",
+    )
+    chord_E_psi: Annotated[float, Field(gt=0, le=5.0e7)] | None = Field(
+        None, description="Chord modulus of elasticity E, psi (SDPWS-2015 Eq. 4.2-1); optional."
+    )
+    chord_A_in2: Annotated[float, Field(gt=0, le=500)] | None = Field(
+        None, description="Chord cross-section area A, in² (SDPWS-2015 Eq. 4.2-1); optional."
+    )
+    chord_splice_slip_in: Annotated[float, Field(ge=0, le=1.0)] | None = Field(
+        None,
+        description="Chord splice slip Δc at the induced unit shear, in, taken as given for "
+        "every splice (SDPWS-2015 Eq. 4.2-1); 0 for chords without slip; optional.",
+    )
+    chord_splice_spacing_ft: Annotated[float, Field(gt=0, le=1000)] | None = Field(
+        None,
+        description="Largest distance between chord splices, ft: Σ(xΔc) of SDPWS-2015 Eq. "
+        "4.2-1 is taken as its upper bound for splices at most this far apart; optional.",
+    )
 
 
 class ShearWallAssembly(_Strict):

@@ -17,6 +17,7 @@ from __future__ import annotations
 from typing import Any
 
 from latbook.spec.models import Spec
+from latbook.spec.overhangs import overhangs
 from latbook.spec.plan_geometry import (
     CHORD_EDGES,
     DIAGRAM_FRACTIONS,
@@ -105,6 +106,7 @@ def _case_rows(spec: Spec, level, d) -> dict[str, Rows]:
     lines = resisting_lines(spec, level.id, d)
     spans = diaphragm_spans(lines, span_extent_ft(level, d))
     t_edge, c_edge = CHORD_EDGES[d]
+    edges = {oh.span.number: oh for oh in overhangs(spec, level.id, d)}
     span_rows: Rows = []
     diag_rows: Rows = []
     cant_rows: Rows = []
@@ -117,10 +119,16 @@ def _case_rows(spec: Spec, level, d) -> dict[str, Rows]:
         if simple and i + 1 < len(spans) and spans[i + 1].kind == "cantilever_end":
             variants.append("before_cant")
         if not simple:
+            oh = edges[sp.number]
             cant_rows.append(
                 {
                     "span": str(sp.number),
                     "span_label": sp.label,
+                    "line": oh.line,
+                    "did": f"{level.id}.{oh.line}",
+                    "below": oh.below_level or "",
+                    "bspan": str(oh.below_span or ""),
+                    "variants": ["below"] if oh.below_span is not None else [],
                     "row_label": f"overhang {sp.label}",
                 }
             )

@@ -86,3 +86,18 @@ def serviceability_deflection_in(delta_in: float, constant_in: float, factor: fl
     if not 0 < factor <= 1:
         raise ValueError("the serviceability factor must be in (0, 1]")
     return factor * (delta_in - constant_in) + constant_in
+
+
+def overhang_edge_drift_in(
+    line_story_drift_in: float,
+    edge_deflection_in: float,
+    edge_deflection_below_in: float,
+    amplification: float,
+) -> float:
+    """Story drift at the free edge of a cantilevered diaphragm (AWC SDPWS-2015 §4.2.5.2):
+    the supporting line's story drift (already amplified) plus the amplification times the
+    overhang's own deflection less that of the overhang below it [in]. Seismic: amplification
+    Cd / Ie, ASCE 7-16 Eq. 12.8-15; wind: the serviceability factor on strength-level W."""
+    if amplification <= 0:
+        raise ValueError("the amplification must be positive")
+    return line_story_drift_in + amplification * (edge_deflection_in - edge_deflection_below_in)
