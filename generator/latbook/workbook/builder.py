@@ -27,15 +27,17 @@ from latbook.spec.models import Spec
 from latbook.spec.revisions import current_revision
 from latbook.workbook.cautions import caution_line, footer_caution
 from latbook.workbook.chart_styles import series_style
-from latbook.workbook.context import build_context
+from latbook.workbook.companions import chunks_apart, culprit_tables, fewer_moves
+from latbook.workbook.context import Context, build_context
 from latbook.workbook.cover import COL_LAST as COVER_LAST_COL
 from latbook.workbook.cover import COVER_SHEET, write_contents_pages, write_cover
 from latbook.workbook.cover_criteria import plan_cover_criteria
 from latbook.workbook.equation_layout import place_equations
-from latbook.workbook.equation_text import cached_text
+from latbook.workbook.equation_text import MAX_FORMULA_CHARS, cached_text
+from latbook.workbook.formula import FORMULA_REF, substitute_ctx
 from latbook.workbook.index_sheet import INDEX_SHEET, write_index
 from latbook.workbook.input_check import HELPER_CACHED, CellGroup, plan_input_check
-from latbook.workbook.layout import CHART_ROW_PX, LAST_GRID_COL, Cell, SheetPlan, plan_sheets
+from latbook.workbook.layout import CHART_ROW_PX, Cell, SheetPlan, plan_sheets
 from latbook.workbook.pagination import (
     SheetPages,
     greedy_pages,
@@ -81,17 +83,82 @@ class BuildError(RuntimeError):
     """The generator and the engine disagree about what exists: a developer error."""
 
 
-def layout(spec: Spec) -> tuple[list[SheetPlan | CellGroup], Registry]:
+def layout(
+    spec: Spec, results: Mapping[str, Any] | None = None
+) -> tuple[list[SheetPlan | CellGroup], Registry]:
     """Every sheet's plan, then the cells placed on the Cover (the live input check and
     design criteria) and SpecData (the input check), and the registry, without writing
-    anything."""
-    registry = Registry()
-    plans = plan_sheets(all_templates(), build_context(spec), registry)
-    place_equations(plans, registry)
+    anything. Table chunks taller than a page, by the row heights the engine's `results`
+    give (computed here when not given), print on companion sheets (companions.py): the
+    sheets are laid out once to measure them, then again with those chunks moved."""
+    context = build_context(spec)
+    plans, registry = _placed(context, {})
+    if results is None:
+        from latbook.analysis import compute_results
+
+        results = compute_results(spec)
+    apart = chunks_apart(plans, printed_values(plans, results))
+    while apart:
+        moved, moved_registry = _placed(context, apart)
+        culprits = culprit_tables(_long_formulas(moved, moved_registry), moved) & set(apart)
+        if not culprits:
+            plans, registry = moved, moved_registry
+            break
+        apart = fewer_moves(apart, culprits)
     groups = plan_input_check(plans, registry)
     cover = next(g for g in groups if g.name == COVER_SHEET)
     cover.cells += plan_cover_criteria(spec, registry)
     return [*plans, *groups], registry
+
+
+def _placed(
+    context: Context, apart: dict[str, list[list[int]]]
+) -> tuple[list[SheetPlan], Registry]:
+    """Every calc sheet laid out, its equations placed; `apart`: see companions.py."""
+    registry = Registry()
+    fixed = (COVER_SHEET, TABLES_SHEET, INDEX_SHEET, SPEC_SHEET)
+    plans = plan_sheets(all_templates(), context, registry, apart, fixed)
+    place_equations(plans, registry)
+    return plans, registry
+
+
+def _long_formulas(plans: list[SheetPlan], registry: Registry) -> list[tuple[str | None, str]]:
+    """(table, formula) of each registered formula over MAX_FORMULA_CHARS characters that
+    moving tables to companion sheets may have lengthened (a reference gains a sheet
+    name): those on a calc sheet with companions or on a companion, and those elsewhere
+    that name a moved table or one of its quantities. Each formula rendered is kept on
+    its cell (`Cell.rendered`) for the writer."""
+    affected = {p.name for p in plans if p.companions or p.companion_of}
+    moved = {t.name for t in registry.tables.values() if t.sheet in affected or t.sheets} - {None}
+    found = []
+    for plan in plans:
+        near = plan.name in affected
+        for cell in plan.cells:
+            if cell.formula is None or cell.qid is None:
+                continue
+            if not near and not _names_moved(cell, moved, registry):
+                continue
+            text = cell.rendered = cell_formula(cell, plan.name, registry)
+            if len(text) > MAX_FORMULA_CHARS:
+                found.append((cell.table, text))
+    return found
+
+
+def _names_moved(cell: Cell, moved: set[str], registry: Registry) -> bool:
+    """Whether a formula reads a table in `moved` (by name or by a quantity id)."""
+    if "{" not in (cell.formula or ""):
+        return False
+    text = substitute_ctx(cell.formula or "", cell.ctx)
+    for body in FORMULA_REF.findall(text):
+        op, sep, rest = body.partition(":")
+        target = rest if sep else body
+        if op == "q" and sep:
+            entry = registry.entries.get(target)
+            if entry is not None and entry.table in moved:
+                return True
+        elif target.split("@")[0].split(".")[0] in moved:
+            return True
+    return False
 
 
 def write_workbook(
@@ -123,7 +190,7 @@ def _no_cyclic_gc() -> Iterator[None]:
 
 
 def _write_workbook(spec, results, path, spec_json, spec_sha256, protect) -> Registry:
-    plans, registry = layout(spec)
+    plans, registry = layout(spec, results)
     missing = [e.id for e in registry.calcs() if e.id not in results]
     if missing:
         raise BuildError(f"the engine has no value for {len(missing)} cells, e.g. {missing[:5]}")
@@ -170,7 +237,7 @@ def _write(spec, results, placed, registry, tmp, spec_json, spec_sha256, protect
         pages = plan_pages(plan, values, caution)
         _write_plan(ws, plan, pages, registry, values, styles, caution)
         _write_charts(wb, ws, plan, registry)
-        _finish_sheet(ws, header, pages, LAST_GRID_COL, protect)
+        _finish_sheet(ws, header, pages, plan.last_col, protect)
         pages_of[plan.name] = pages.pages
 
     for name, qid in sorted(registry.names.items()):
@@ -245,7 +312,7 @@ def contents(plans: list[SheetPlan]) -> list[tuple[str, str]]:
 def page_counts(spec: Spec, results: Mapping[str, Any]) -> dict[str, int]:
     """Printed pages of each printed sheet, in print order (Cover, calc sheets, Tables), as
     the layout determines them; for a table of contents with page numbers."""
-    plans, registry = layout(spec)
+    plans, registry = layout(spec, results)
     counts: dict[str, int] = {}
     scratch = xlsxwriter.Workbook(None, {"in_memory": True})
     styles = Styles(scratch)
@@ -294,8 +361,9 @@ def _write_plan(
     styles,
     caution: str,
 ) -> None:
-    for col, width in enumerate(GRID_WIDTHS):
-        ws.set_column(col, col, width)
+    for band in range(plan.bands):  # a companion sheet: the grid repeated side by side
+        for col, width in enumerate(GRID_WIDTHS):
+            ws.set_column(band * len(GRID_WIDTHS) + col, band * len(GRID_WIDTHS) + col, width)
     for row, height in pages.heights.items():
         ws.set_row(row, height)
     tables = registry.tables
@@ -375,8 +443,8 @@ def _series_options(chart_type: str, s: dict, n: int, registry: Registry) -> dic
     # a field's rows are those of its column chunk (TablePos.offsets)
     options: dict[str, Any] = {
         "name": s["name"],
-        "categories": [tpos.sheet, tpos.row_of(x, first), x_col, tpos.row_of(x, last), x_col],
-        "values": [tpos.sheet, tpos.row_of(y, first), y_col, tpos.row_of(y, last), y_col],
+        "categories": [tpos.sheet_of(x), tpos.row_of(x, first), x_col, tpos.row_of(x, last), x_col],
+        "values": [tpos.sheet_of(y), tpos.row_of(y, first), y_col, tpos.row_of(y, last), y_col],
         **series_style(chart_type, s["cycle"], n),
         **s["style"],
     }
@@ -496,6 +564,8 @@ def _finish_sheet(ws, header, pages: SheetPages, last_col: int, protect: bool) -
     ws.print_area(0, 0, max(pages.last_row, 1), last_col)
     if pages.breaks:
         ws.set_h_pagebreaks(pages.breaks)
+    if pages.bands > 1:  # a page column per band; pages print down, then over
+        ws.set_v_pagebreaks([band * len(GRID_WIDTHS) for band in range(1, pages.bands)])
     if pages.repeat is not None:
         ws.repeat_rows(*pages.repeat)
     ws.set_margins(
