@@ -11,6 +11,7 @@ import contextlib
 import datetime as dt
 import gc
 import json
+import math
 import types
 import zipfile
 from collections.abc import Iterator, Mapping
@@ -40,7 +41,7 @@ from latbook.workbook.input_check import HELPER_CACHED, CellGroup, plan_input_ch
 from latbook.workbook.layout import CHART_ROW_PX, Cell, SheetPlan, plan_sheets
 from latbook.workbook.pagination import (
     SheetPages,
-    greedy_pages,
+    greedy_breaks,
     paginate,
     row_heights,
     title_cells,
@@ -222,12 +223,16 @@ def _write(spec, results, placed, registry, tmp, spec_json, spec_sha256, protect
     last, toc_rows = write_cover(cover, spec, spec_sha256, styles, results, contents(plans))
     _write_group(cover, groups[COVER_SHEET], registry, results, styles)
     _fix_row_heights(cover, last)
-    pages_of = {COVER_SHEET: _sheet_pages(cover, last, _cover_scale(cover))}
-    _finish_sheet(cover, header, SheetPages(last_row=last), COVER_LAST_COL, protect)
-    if _cover_scale(cover) < 1.0:
+    scale = _cover_scale(cover)
+    breaks = _sheet_breaks(cover, last, scale)
+    pages_of = {COVER_SHEET: len(breaks) + 1}
+    _finish_sheet(cover, header, SheetPages(breaks=breaks, last_row=last), COVER_LAST_COL, protect)
+    if scale < 1.0:
         # cover.py's columns are a little wider than the page where LibreOffice prints with
-        # its fallback font (print_grid.col_width_pt): fit the width (about 95 %)
-        cover.fit_to_pages(1, 0)
+        # its fallback font (print_grid.col_width_pt): a whole percent that fits the width
+        # (about 95 %), with the page breaks counted at that scale (a fit-to-width scale of
+        # LibreOffice's own choosing would move them)
+        cover.set_print_scale(round(scale * 100))
 
     sheets = {plan.name: wb.add_worksheet(plan.name) for plan in plans}
     caution = caution_line(spec)
@@ -319,6 +324,7 @@ def page_counts(spec: Spec, results: Mapping[str, Any]) -> dict[str, int]:
     sheet_plans = [p for p in plans if isinstance(p, SheetPlan)]
     cover = scratch.add_worksheet(COVER_SHEET)
     last, _ = write_cover(cover, spec, "0" * 64, styles, results, contents(sheet_plans))
+    _fix_row_heights(cover, last)
     counts[COVER_SHEET] = _sheet_pages(cover, last, _cover_scale(cover))
     values = printed_values(sheet_plans, results)
     for plan in sheet_plans:
@@ -338,18 +344,25 @@ def _fix_row_heights(ws: Worksheet, last_row: int) -> None:
 
 
 def _sheet_pages(ws: Worksheet, last_row: int, scale: float = 1.0) -> int:
+    return len(_sheet_breaks(ws, last_row, scale)) + 1
+
+
+def _sheet_breaks(ws: Worksheet, last_row: int, scale: float = 1.0) -> list[int]:
+    """Rows that start a page when the rows fill pages one after another at `scale`."""
     # xlsxwriter keeps row heights in pixels
     heights = [
         ws.row_sizes[r][0] * 0.75 if r in ws.row_sizes else ROW_MIN_PT for r in range(last_row + 1)
     ]
-    return greedy_pages(h * scale for h in heights)
+    return greedy_breaks([h * scale for h in heights])
 
 
 def _cover_scale(ws: Worksheet) -> float:
-    """The print scale that fits the Cover's columns (widths set by cover.py) to the page."""
+    """The print scale, a whole percent, that fits the Cover's columns (widths set by
+    cover.py) to the page."""
     # xlsxwriter keeps widths in pixels (7 px per unit + 5)
     width = sum(col_width_pt((info.width - 5) / 7) for info in ws.col_info.values())
-    return min(1.0, printable_width_pt() * WIDTH_SAFETY / width) if width else 1.0
+    fit = printable_width_pt() * WIDTH_SAFETY / width if width else 1.0
+    return min(1.0, math.floor(fit * 100) / 100)
 
 
 def _write_plan(

@@ -182,16 +182,18 @@ def _paginate(
     return pages
 
 
-def greedy_pages(heights: Iterable[float]) -> int:
-    """Pages a sheet without manual breaks fills, row after row (the Cover, Tables)."""
+def greedy_breaks(heights: list[float]) -> list[int]:
+    """Rows that start a page when rows fill pages one after another (the Cover, Tables):
+    within the printable height less the safety share, so that LibreOffice, given these
+    breaks, needs none of its own."""
     page_h = printable_height_pt()
-    pages, y = 1, 0.0
-    for h in heights:
+    breaks, y = [], 0.0
+    for r, h in enumerate(heights):
         if y + h > page_h and y > 0:
-            pages += 1
+            breaks.append(r)
             y = 0.0
         y += h
-    return pages
+    return breaks
 
 
 def foreign_header_pages(plan: SheetPlan, pages: SheetPages) -> int:
