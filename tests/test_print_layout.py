@@ -16,8 +16,12 @@ from pathlib import Path
 import openpyxl
 import pytest
 
-from latbook.build import build_workbook
+from latbook.build import build_workbook, check_spec
+from latbook.workbook.builder import layout, plan_pages, printed_values
+from latbook.workbook.cautions import caution_line
 from latbook.workbook.index_sheet import locate_in_index
+from latbook.workbook.layout import SheetPlan
+from latbook.workbook.pagination import foreign_header_pages
 from latbook.workbook.print_grid import (
     col_width_pt,
     line_height_pt,
@@ -71,11 +75,15 @@ def test_every_printed_sheet_is_landscape_at_full_scale_within_the_page(example_
         assert not ws.sheet_properties.pageSetUpPr or not ws.sheet_properties.pageSetUpPr.fitToPage
         assert ws.page_setup.scale in (None, 100), ws.title
         c0, c1 = _print_cols(ws)
-        width = sum(
-            col_width_pt(_width_units(ws, openpyxl.utils.get_column_letter(c)))
-            for c in range(c0, c1 + 1)
-        )
-        assert width <= printable_width_pt(), (ws.title, width)
+        # a companion sheet prints its bands of columns on pages of their own (column
+        # page breaks): each band fits the page width
+        cuts = sorted(b.id + 1 for b in ws.col_breaks.brk)  # first column after each break
+        for first, last in zip([c0, *cuts], [*(c - 1 for c in cuts), c1], strict=True):
+            width = sum(
+                col_width_pt(_width_units(ws, openpyxl.utils.get_column_letter(c)))
+                for c in range(first, last + 1)
+            )
+            assert width <= printable_width_pt(), (ws.title, first, width)
 
 
 def _merged_widths(ws) -> dict[tuple[int, int], float]:
@@ -162,3 +170,25 @@ def test_the_index_finds_fields_of_later_chunks(example_book):
     ws = example_book["Walls_in"]
     heads = [c.value for c in ws["A"] if isinstance(c.value, str) and "(part " in c.value]
     assert len(heads) >= 2
+
+
+@pytest.mark.parametrize("spec_path", EXAMPLES, ids=lambda p: p.parent.name)
+def test_no_page_continues_a_table_without_its_header(spec_path):
+    """By the layout's own pagination (the LibreOffice test checks the PDF): every page
+    break inside a table chunk's rows falls where that chunk's header rows repeat, no page
+    repeats the header of a chunk that has ended, and the examples need companion sheets
+    (derived: their wall-segment tables run over several pages)."""
+    spec, results = check_spec(json.loads(spec_path.read_text(encoding="utf-8")))
+    plans, _ = layout(spec, results)
+    sheets = [p for p in plans if isinstance(p, SheetPlan)]
+    values = printed_values(sheets, results)
+    unserved = []
+    for plan in sheets:
+        pages = plan_pages(plan, values, caution_line(spec))
+        for block in plan.blocks:
+            inside = [r for r in pages.breaks if block.first_row < r <= block.last_row]
+            if block.header is not None and inside and pages.repeat != block.header:
+                unserved.append((plan.name, block.first_row, inside))
+        assert foreign_header_pages(plan, pages) == 0, plan.name
+    assert not unserved, unserved[:5]
+    assert any(p.companion_of for p in sheets)

@@ -21,9 +21,10 @@ import pytest
 
 from latbook.build import build_workbook, check_spec
 from latbook.recalc import find_soffice
-from latbook.workbook.builder import layout, page_counts
-from latbook.workbook.cautions import FOOTER_REVIEW
+from latbook.workbook.builder import layout, page_counts, plan_pages, printed_values
+from latbook.workbook.cautions import FOOTER_REVIEW, caution_line
 from latbook.workbook.layout import SheetPlan
+from latbook.workbook.print_grid import GRID_COLS
 from tests.helpers.printout import page_sheet, print_pdf, read_pages
 
 pytestmark = [
@@ -122,3 +123,60 @@ def test_long_labels_and_the_footer_print_in_full(printed):
 
 def _tokens(text: str) -> list[str]:
     return [t for t in re.split(r"[\s-]+", text) if t]
+
+
+def test_every_page_of_a_table_prints_that_tables_header_at_the_top(printed):
+    """Each printed page that shows data rows of a table chunk carries that chunk's own
+    header rows: the longest word of every column heading of the chunk, on a page the chunk
+    continues onto in the page's upper half, above its data (pages found by the sheet name
+    in their header and their order; rows and column bands of each page from the layout,
+    whose page counts the test above compares)."""
+    spec, results, pages, _ = printed
+    plans, _ = layout(spec, results)
+    sheets = [p for p in plans if isinstance(p, SheetPlan)]
+    names = [*(p.name for p in sheets), "Cover", "Tables"]
+    by_sheet: dict[str, list] = {}
+    for page in pages:
+        by_sheet.setdefault(page_sheet(page, names), []).append(page)
+    values = printed_values(sheets, results)
+    checked, missing = 0, []
+    for plan in sheets:
+        layout_pages = plan_pages(plan, values, caution_line(spec))
+        starts = [0, *layout_pages.breaks]
+        ends = [*layout_pages.breaks, layout_pages.last_row + 1]
+        printed_pages = iter(by_sheet[plan.name])
+        for band in range(plan.bands):
+            cols = range(band * GRID_COLS, (band + 1) * GRID_COLS)
+            for first, end in zip(starts, ends, strict=True):
+                page = next(printed_pages)
+                for block in plan.blocks:
+                    if block.header is None or block.last_row < max(first, block.header[1] + 1):
+                        continue
+                    if block.header[1] + 1 >= end:
+                        continue  # no data row of the block on this page
+                    heads = {
+                        max(_words(c.text), key=len)
+                        for c in plan.cells
+                        if c.style == "th"
+                        and c.text
+                        and c.col in cols
+                        and block.header[0] <= c.row <= block.header[1]
+                    }
+                    continued = block.first_row < first
+                    shown = {
+                        w
+                        for (_, t), box in zip(page.words, page.boxes, strict=True)
+                        if not continued or box[1] < page.height_pt / 2
+                        for w in _words(t)
+                    }
+                    checked += continued
+                    lost = heads - shown
+                    if lost:
+                        missing.append((plan.name, band, first, block.first_row, sorted(lost)))
+    assert checked > 5  # continuation pages seen
+    assert not missing, missing[:5]
+
+
+def _words(text: str) -> list[str]:
+    """Words without the punctuation around them."""
+    return [w for t in _tokens(text) if (w := t.strip("()[]{}:;,.'\"")) and w != "="] or [""]

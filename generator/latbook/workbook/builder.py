@@ -11,6 +11,7 @@ import contextlib
 import datetime as dt
 import gc
 import json
+import math
 import types
 import zipfile
 from collections.abc import Iterator, Mapping
@@ -27,18 +28,20 @@ from latbook.spec.models import Spec
 from latbook.spec.revisions import current_revision
 from latbook.workbook.cautions import caution_line, footer_caution
 from latbook.workbook.chart_styles import series_style
-from latbook.workbook.context import build_context
+from latbook.workbook.companions import chunks_apart, culprit_tables, fewer_moves
+from latbook.workbook.context import Context, build_context
 from latbook.workbook.cover import COL_LAST as COVER_LAST_COL
 from latbook.workbook.cover import COVER_SHEET, write_contents_pages, write_cover
 from latbook.workbook.cover_criteria import plan_cover_criteria
 from latbook.workbook.equation_layout import place_equations
-from latbook.workbook.equation_text import cached_text
+from latbook.workbook.equation_text import MAX_FORMULA_CHARS, cached_text
+from latbook.workbook.formula import FORMULA_REF, substitute_ctx
 from latbook.workbook.index_sheet import INDEX_SHEET, write_index
 from latbook.workbook.input_check import HELPER_CACHED, CellGroup, plan_input_check
-from latbook.workbook.layout import CHART_ROW_PX, LAST_GRID_COL, Cell, SheetPlan, plan_sheets
+from latbook.workbook.layout import CHART_ROW_PX, Cell, SheetPlan, plan_sheets
 from latbook.workbook.pagination import (
     SheetPages,
-    greedy_pages,
+    greedy_breaks,
     paginate,
     row_heights,
     title_cells,
@@ -81,17 +84,82 @@ class BuildError(RuntimeError):
     """The generator and the engine disagree about what exists: a developer error."""
 
 
-def layout(spec: Spec) -> tuple[list[SheetPlan | CellGroup], Registry]:
+def layout(
+    spec: Spec, results: Mapping[str, Any] | None = None
+) -> tuple[list[SheetPlan | CellGroup], Registry]:
     """Every sheet's plan, then the cells placed on the Cover (the live input check and
     design criteria) and SpecData (the input check), and the registry, without writing
-    anything."""
-    registry = Registry()
-    plans = plan_sheets(all_templates(), build_context(spec), registry)
-    place_equations(plans, registry)
+    anything. Table chunks taller than a page, by the row heights the engine's `results`
+    give (computed here when not given), print on companion sheets (companions.py): the
+    sheets are laid out once to measure them, then again with those chunks moved."""
+    context = build_context(spec)
+    plans, registry = _placed(context, {})
+    if results is None:
+        from latbook.analysis import compute_results
+
+        results = compute_results(spec)
+    apart = chunks_apart(plans, printed_values(plans, results))
+    while apart:
+        moved, moved_registry = _placed(context, apart)
+        culprits = culprit_tables(_long_formulas(moved, moved_registry), moved) & set(apart)
+        if not culprits:
+            plans, registry = moved, moved_registry
+            break
+        apart = fewer_moves(apart, culprits)
     groups = plan_input_check(plans, registry)
     cover = next(g for g in groups if g.name == COVER_SHEET)
     cover.cells += plan_cover_criteria(spec, registry)
     return [*plans, *groups], registry
+
+
+def _placed(
+    context: Context, apart: dict[str, list[list[int]]]
+) -> tuple[list[SheetPlan], Registry]:
+    """Every calc sheet laid out, its equations placed; `apart`: see companions.py."""
+    registry = Registry()
+    fixed = (COVER_SHEET, TABLES_SHEET, INDEX_SHEET, SPEC_SHEET)
+    plans = plan_sheets(all_templates(), context, registry, apart, fixed)
+    place_equations(plans, registry)
+    return plans, registry
+
+
+def _long_formulas(plans: list[SheetPlan], registry: Registry) -> list[tuple[str | None, str]]:
+    """(table, formula) of each registered formula over MAX_FORMULA_CHARS characters that
+    moving tables to companion sheets may have lengthened (a reference gains a sheet
+    name): those on a calc sheet with companions or on a companion, and those elsewhere
+    that name a moved table or one of its quantities. Each formula rendered is kept on
+    its cell (`Cell.rendered`) for the writer."""
+    affected = {p.name for p in plans if p.companions or p.companion_of}
+    moved = {t.name for t in registry.tables.values() if t.sheet in affected or t.sheets} - {None}
+    found = []
+    for plan in plans:
+        near = plan.name in affected
+        for cell in plan.cells:
+            if cell.formula is None or cell.qid is None:
+                continue
+            if not near and not _names_moved(cell, moved, registry):
+                continue
+            text = cell.rendered = cell_formula(cell, plan.name, registry)
+            if len(text) > MAX_FORMULA_CHARS:
+                found.append((cell.table, text))
+    return found
+
+
+def _names_moved(cell: Cell, moved: set[str], registry: Registry) -> bool:
+    """Whether a formula reads a table in `moved` (by name or by a quantity id)."""
+    if "{" not in (cell.formula or ""):
+        return False
+    text = substitute_ctx(cell.formula or "", cell.ctx)
+    for body in FORMULA_REF.findall(text):
+        op, sep, rest = body.partition(":")
+        target = rest if sep else body
+        if op == "q" and sep:
+            entry = registry.entries.get(target)
+            if entry is not None and entry.table in moved:
+                return True
+        elif target.split("@")[0].split(".")[0] in moved:
+            return True
+    return False
 
 
 def write_workbook(
@@ -123,7 +191,7 @@ def _no_cyclic_gc() -> Iterator[None]:
 
 
 def _write_workbook(spec, results, path, spec_json, spec_sha256, protect) -> Registry:
-    plans, registry = layout(spec)
+    plans, registry = layout(spec, results)
     missing = [e.id for e in registry.calcs() if e.id not in results]
     if missing:
         raise BuildError(f"the engine has no value for {len(missing)} cells, e.g. {missing[:5]}")
@@ -155,12 +223,16 @@ def _write(spec, results, placed, registry, tmp, spec_json, spec_sha256, protect
     last, toc_rows = write_cover(cover, spec, spec_sha256, styles, results, contents(plans))
     _write_group(cover, groups[COVER_SHEET], registry, results, styles)
     _fix_row_heights(cover, last)
-    pages_of = {COVER_SHEET: _sheet_pages(cover, last, _cover_scale(cover))}
-    _finish_sheet(cover, header, SheetPages(last_row=last), COVER_LAST_COL, protect)
-    if _cover_scale(cover) < 1.0:
+    scale = _cover_scale(cover)
+    breaks = _sheet_breaks(cover, last, scale)
+    pages_of = {COVER_SHEET: len(breaks) + 1}
+    _finish_sheet(cover, header, SheetPages(breaks=breaks, last_row=last), COVER_LAST_COL, protect)
+    if scale < 1.0:
         # cover.py's columns are a little wider than the page where LibreOffice prints with
-        # its fallback font (print_grid.col_width_pt): fit the width (about 95 %)
-        cover.fit_to_pages(1, 0)
+        # its fallback font (print_grid.col_width_pt): a whole percent that fits the width
+        # (about 95 %), with the page breaks counted at that scale (a fit-to-width scale of
+        # LibreOffice's own choosing would move them)
+        cover.set_print_scale(round(scale * 100))
 
     sheets = {plan.name: wb.add_worksheet(plan.name) for plan in plans}
     caution = caution_line(spec)
@@ -170,7 +242,7 @@ def _write(spec, results, placed, registry, tmp, spec_json, spec_sha256, protect
         pages = plan_pages(plan, values, caution)
         _write_plan(ws, plan, pages, registry, values, styles, caution)
         _write_charts(wb, ws, plan, registry)
-        _finish_sheet(ws, header, pages, LAST_GRID_COL, protect)
+        _finish_sheet(ws, header, pages, plan.last_col, protect)
         pages_of[plan.name] = pages.pages
 
     for name, qid in sorted(registry.names.items()):
@@ -245,13 +317,14 @@ def contents(plans: list[SheetPlan]) -> list[tuple[str, str]]:
 def page_counts(spec: Spec, results: Mapping[str, Any]) -> dict[str, int]:
     """Printed pages of each printed sheet, in print order (Cover, calc sheets, Tables), as
     the layout determines them; for a table of contents with page numbers."""
-    plans, registry = layout(spec)
+    plans, registry = layout(spec, results)
     counts: dict[str, int] = {}
     scratch = xlsxwriter.Workbook(None, {"in_memory": True})
     styles = Styles(scratch)
     sheet_plans = [p for p in plans if isinstance(p, SheetPlan)]
     cover = scratch.add_worksheet(COVER_SHEET)
     last, _ = write_cover(cover, spec, "0" * 64, styles, results, contents(sheet_plans))
+    _fix_row_heights(cover, last)
     counts[COVER_SHEET] = _sheet_pages(cover, last, _cover_scale(cover))
     values = printed_values(sheet_plans, results)
     for plan in sheet_plans:
@@ -271,18 +344,25 @@ def _fix_row_heights(ws: Worksheet, last_row: int) -> None:
 
 
 def _sheet_pages(ws: Worksheet, last_row: int, scale: float = 1.0) -> int:
+    return len(_sheet_breaks(ws, last_row, scale)) + 1
+
+
+def _sheet_breaks(ws: Worksheet, last_row: int, scale: float = 1.0) -> list[int]:
+    """Rows that start a page when the rows fill pages one after another at `scale`."""
     # xlsxwriter keeps row heights in pixels
     heights = [
         ws.row_sizes[r][0] * 0.75 if r in ws.row_sizes else ROW_MIN_PT for r in range(last_row + 1)
     ]
-    return greedy_pages(h * scale for h in heights)
+    return greedy_breaks([h * scale for h in heights])
 
 
 def _cover_scale(ws: Worksheet) -> float:
-    """The print scale that fits the Cover's columns (widths set by cover.py) to the page."""
+    """The print scale, a whole percent, that fits the Cover's columns (widths set by
+    cover.py) to the page."""
     # xlsxwriter keeps widths in pixels (7 px per unit + 5)
     width = sum(col_width_pt((info.width - 5) / 7) for info in ws.col_info.values())
-    return min(1.0, printable_width_pt() * WIDTH_SAFETY / width) if width else 1.0
+    fit = printable_width_pt() * WIDTH_SAFETY / width if width else 1.0
+    return min(1.0, math.floor(fit * 100) / 100)
 
 
 def _write_plan(
@@ -294,8 +374,9 @@ def _write_plan(
     styles,
     caution: str,
 ) -> None:
-    for col, width in enumerate(GRID_WIDTHS):
-        ws.set_column(col, col, width)
+    for band in range(plan.bands):  # a companion sheet: the grid repeated side by side
+        for col, width in enumerate(GRID_WIDTHS):
+            ws.set_column(band * len(GRID_WIDTHS) + col, band * len(GRID_WIDTHS) + col, width)
     for row, height in pages.heights.items():
         ws.set_row(row, height)
     tables = registry.tables
@@ -375,8 +456,8 @@ def _series_options(chart_type: str, s: dict, n: int, registry: Registry) -> dic
     # a field's rows are those of its column chunk (TablePos.offsets)
     options: dict[str, Any] = {
         "name": s["name"],
-        "categories": [tpos.sheet, tpos.row_of(x, first), x_col, tpos.row_of(x, last), x_col],
-        "values": [tpos.sheet, tpos.row_of(y, first), y_col, tpos.row_of(y, last), y_col],
+        "categories": [tpos.sheet_of(x), tpos.row_of(x, first), x_col, tpos.row_of(x, last), x_col],
+        "values": [tpos.sheet_of(y), tpos.row_of(y, first), y_col, tpos.row_of(y, last), y_col],
         **series_style(chart_type, s["cycle"], n),
         **s["style"],
     }
@@ -496,6 +577,8 @@ def _finish_sheet(ws, header, pages: SheetPages, last_col: int, protect: bool) -
     ws.print_area(0, 0, max(pages.last_row, 1), last_col)
     if pages.breaks:
         ws.set_h_pagebreaks(pages.breaks)
+    if pages.bands > 1:  # a page column per band; pages print down, then over
+        ws.set_v_pagebreaks([band * len(GRID_WIDTHS) for band in range(1, pages.bands)])
     if pages.repeat is not None:
         ws.repeat_rows(*pages.repeat)
     ws.set_margins(

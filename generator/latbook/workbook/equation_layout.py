@@ -95,7 +95,7 @@ def _index(plans: list[SheetPlan], registry: Registry) -> _Index:
             index.fmt[cell.qid] = fmt if fmt in EQUATION_FORMATS else EQUATION_FORMATS[-1]
     for table in registry.tables.values():
         for fld, col in table.cols.items():
-            qid = index.at.get((table.sheet, table.row_of(fld, table.first_row), col))
+            qid = index.at.get((table.sheet_of(fld), table.row_of(fld, table.first_row), col))
             header = index.symbol.get(qid, fld) if qid else fld
             index.column[(table.name, fld)] = _short(header, fld)
     return index
@@ -188,7 +188,9 @@ def _resolve(
         row = tpos.rows[str(key)]
     else:
         return None
-    return _operand(index.at.get((tpos.sheet, tpos.row_of(fld, row), tpos.cols[fld])), index)
+    return _operand(
+        index.at.get((tpos.sheet_of(fld), tpos.row_of(fld, row), tpos.cols[fld])), index
+    )
 
 
 def _operand(qid: str | None, index: _Index) -> Operand | None:

@@ -24,7 +24,7 @@ from typing import Any
 from latbook.workbook.registry import Registry, TablePos, a1
 
 _CTX = re.compile(r"<([A-Za-z_][A-Za-z0-9_]*)>")
-_REF = re.compile(r"\{([^{}]+)\}")
+_REF = FORMULA_REF = re.compile(r"\{([^{}]+)\}")  # a reference: {field}, {q:id}...
 
 
 class TemplateError(ValueError):
@@ -63,12 +63,12 @@ def render(
 
     def ref(table_pos: TablePos, r: int, field: str) -> str:
         c = _col(table_pos, field)
-        return _qualify(table_pos.sheet, sheet, a1(table_pos.row_of(field, r), c))
+        return _qualify(table_pos.sheet_of(field), sheet, a1(table_pos.row_of(field, r), c))
 
     def span(table_pos: TablePos, r0: int, r1: int, field: str) -> str:
         c = _col(table_pos, field)
         r0, r1 = table_pos.row_of(field, r0), table_pos.row_of(field, r1)
-        return _qualify(table_pos.sheet, sheet, f"{a1(r0, c, True)}:{a1(r1, c, True)}")
+        return _qualify(table_pos.sheet_of(field), sheet, f"{a1(r0, c, True)}:{a1(r1, c, True)}")
 
     def lookup(spec: str) -> tuple[TablePos, str, str | None]:
         target, _, key_from = spec.partition("@")

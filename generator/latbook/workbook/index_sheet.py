@@ -62,7 +62,7 @@ def write_index(ws: Worksheet, registry: Registry, styles: Styles) -> int:
             first = first_in_column.get((t.name, top, c))
             if first is None:
                 continue
-            cells = f"{t.sheet}!{a1(top, c)}:{a1(bottom, c)}"
+            cells = f"{t.sheet_of(fld)}!{a1(top, c)}:{a1(bottom, c)}"
             label = first.label.split(" [")[0]
             columns.append((pattern, first.kind, cells, t.name, label, first.unit, first.clause))
     row = _part(ws, row + 1, 1, COLUMN_HEADERS, styles, columns)

@@ -6,6 +6,7 @@ wherever it is laid out.
 
 from __future__ import annotations
 
+from collections.abc import Iterable
 from dataclasses import dataclass, field
 from typing import Any
 
@@ -48,6 +49,7 @@ class Cell:
     parts: tuple[Any, ...] | None = None  # an equation cell's parts (equation_text)
     span: int = 1  # grid columns the cell covers (merged when > 1)
     table_row: int | None = None  # a table cell: its row in the table's first column chunk
+    rendered: str | None = None  # its formula as written, once rendered (builder.layout)
 
 
 @dataclass(frozen=True)
@@ -60,6 +62,8 @@ class PrintBlock:
     first_row: int
     last_row: int
     header: tuple[int, int] | None = None
+    table: str | None = None  # a table chunk's table
+    chunk: int = 0  # ... and its chunk
 
 
 @dataclass
@@ -74,6 +78,12 @@ class SheetPlan:
     blocks: list[PrintBlock] = field(default_factory=list)
     last_row: int = 0
     last_col: int = LAST_GRID_COL
+    bands: int = 1  # column bands of GRID_COLS, side by side (a companion sheet)
+    companion_of: str = ""  # a companion sheet: its calc sheet
+    # tables printed on companion sheets: name -> groups of chunk indices, a sheet each
+    apart: dict[str, list[list[int]]] = field(default_factory=dict)
+    companions: list[SheetPlan] = field(default_factory=list)
+    taken: set[str] = field(default_factory=set)  # sheet names in use (lower case)
     # a table column's header equation, placed once every name is registered
     column_equations: list[ColumnEquation] = field(default_factory=list)
 
@@ -92,19 +102,31 @@ class ColumnEquation:
 
 
 def plan_sheets(
-    templates: tuple[SheetTemplate, ...], context: Context, registry: Registry
+    templates: tuple[SheetTemplate, ...],
+    context: Context,
+    registry: Registry,
+    apart: dict[str, list[list[int]]] | None = None,
+    reserved: Iterable[str] = (),
 ) -> list[SheetPlan]:
-    """Lay out every sheet the context asks for; fills `registry`."""
+    """Lay out every sheet the context asks for; fills `registry`. A table named in
+    `apart` prints on companion sheets (one per group of its chunk indices) that follow
+    its calc sheet, named apart from every calc sheet and the `reserved` names."""
     plans: list[SheetPlan] = []
-    for tpl in templates:
-        if not context.holds(tpl.when):
-            continue
-        instances = context.collections[tpl.repeat] if tpl.repeat else [{}]
-        for sheet_ctx in instances:
-            name = substitute_ctx(tpl.name, sheet_ctx)
-            plan = SheetPlan(name, substitute_ctx(tpl.title, sheet_ctx), tpl, dict(sheet_ctx))
-            _place_blocks(plan, context, registry)
-            plans.append(plan)
+    sheets = [
+        (tpl, sheet_ctx)
+        for tpl in templates
+        if context.holds(tpl.when)
+        for sheet_ctx in (context.collections[tpl.repeat] if tpl.repeat else [{}])
+    ]
+    taken = {n.lower() for n in reserved} | {
+        substitute_ctx(tpl.name, ctx).lower() for tpl, ctx in sheets
+    }
+    for tpl, sheet_ctx in sheets:
+        name = substitute_ctx(tpl.name, sheet_ctx)
+        plan = SheetPlan(name, substitute_ctx(tpl.title, sheet_ctx), tpl, dict(sheet_ctx))
+        plan.apart, plan.taken = apart or {}, taken
+        _place_blocks(plan, context, registry)
+        plans += [plan, *plan.companions]
     return plans
 
 
@@ -308,7 +330,9 @@ def _place_table(
 ) -> int:
     """Lay out a table as stacked column chunks that fit the print grid (table_chunks.py):
     chunk k holds its columns for every data row; chunks after the first repeat the key
-    column. The registry maps each field to its column and its chunk's row offset."""
+    column. The registry maps each field to its sheet, column and chunk's row offset.
+    A table in `plan.apart` (taller than a page, companions.py) prints on companion sheets
+    instead, its chunks side by side; the calc sheet says where."""
     columns = [c for c in block.columns if context.holds(c.when)]
     rows = context.collections[substitute_ctx(block.over or "", plan.ctx)]
     chunks = chunk_columns([c.width for c in columns])
@@ -318,61 +342,200 @@ def _place_table(
     tpos.patterns = {col.field: col.id for col in columns if col.id}
     used = sorted({f for pattern in tpos.patterns.values() for f in ctx_fields(pattern)})
     contexts = [{**plan.ctx, **row_ctx, "row_index": i} for i, row_ctx in enumerate(rows)]
-    first_rows: list[int] = []
-    for k, chunk in enumerate(chunks):
-        start = row
-        if title:
-            part = f" (part {k + 1} of {len(chunks)})" if len(chunks) > 1 else ""
-            plan.cells.append(_heading(row, title + part))
-            row += 1
-        placed = chunk if k == 0 else [ChunkColumn(0, 0, 1), *chunk]
-        for pc in placed:
-            col = columns[pc.index]
-            plan.cells += [
-                Cell(row, pc.grid_col, "th", text=col.header, span=pc.span),
-                Cell(row + 1, pc.grid_col, "th_unit", text=col.unit, span=pc.span),
-                Cell(
-                    row + 2,
-                    pc.grid_col,
-                    "th_clause",
-                    text=substitute_ctx(col.clause, plan.ctx),
-                    span=pc.span,
-                ),
-            ]
-            if pc in chunk and (col.formula is not None or col.equation):
-                plan.column_equations.append(_column_equation(plan, col, name, row + 3, pc))
-        last_header = row + TABLE_HEADER_ROWS - 1
-        plan.header_rows.append((row, last_header))
-        first = last_header + 1
-        first_rows.append(first)
-        for pc in chunk:
-            tpos.cols[columns[pc.index].field] = pc.grid_col
-            tpos.offsets[columns[pc.index].field] = first - first_rows[0]
-        row = first + len(rows)
+    table = _TableParts(name, title, columns, chunks, contexts, tpos)
+    groups = plan.apart.get(name, [])
+    places = _companion_places(plan, table, groups)
+    moved = sorted(places)
+    for k in range(len(chunks)):
+        if k in moved[1:]:
+            continue
+        if k > 0:
+            row += 1  # a blank row between the parts
+        if k in moved:
+            row = _place_pointer(plan, table, places, row)
+            continue
+        places[k] = _ChunkPlace(plan, row, 0, row + bool(title) + TABLE_HEADER_ROWS)
+        last_data = places[k].first_data + len(rows) - 1
         plan.blocks.append(
-            PrintBlock(start, max(row - 1, first - 1), (first - TABLE_HEADER_ROWS, first - 1))
+            PrintBlock(
+                row,
+                max(last_data, places[k].first_data - 1),
+                (places[k].first_data - TABLE_HEADER_ROWS, places[k].first_data - 1),
+                name,
+                k,
+            )
         )
-        if k + 1 < len(chunks):
-            row += 1
-    tpos.first_row = first_rows[0] if first_rows else row
+        row = last_data + 1
+    places = dict(sorted(places.items()))
+    for k, place in places.items():
+        _place_chunk_head(place, table, k)
+    tpos.first_row = places[0].first_data if places else row
+    if places:
+        tpos.sheet = places[0].plan.name
     for i, merged in enumerate(contexts):
         key = str(merged[tpos.key])
         tpos.rows[key] = tpos.first_row + i
         tpos.bindings[key] = {f: str(merged[f]) for f in used}
-    for k, chunk in enumerate(chunks):
-        first = first_rows[k]
-        for i, merged in enumerate(contexts):
-            if k > 0:
-                plan.cells.append(_key_copy(columns[0], merged, first + i, tpos.key))
-            for pc in chunk:
-                cell = _table_cell(
-                    plan, columns[pc.index], merged, name, first + i, pc.grid_col, context, registry
-                )
-                cell.span = pc.span
-                cell.table_row = tpos.first_row + i
-                plan.cells.append(cell)
+    for k, place in places.items():
+        for pc in chunks[k]:
+            fld = columns[pc.index].field
+            tpos.cols[fld] = place.col0 + pc.grid_col
+            tpos.offsets[fld] = place.first_data - tpos.first_row
+            if place.plan.name != tpos.sheet:
+                tpos.sheets[fld] = place.plan.name
+    for k, place in places.items():
+        _place_chunk_rows(place, table, k, context, registry)
     registry.add_table(tpos)
     return row
+
+
+@dataclass(frozen=True)
+class _TableParts:
+    """A table being laid out: its columns cut into chunks, and its rows' contexts."""
+
+    name: str
+    title: str
+    columns: list[Column]
+    chunks: list[list[ChunkColumn]]
+    contexts: list[dict[str, Any]]
+    tpos: TablePos
+
+
+@dataclass(frozen=True)
+class _ChunkPlace:
+    """Where a column chunk goes: its sheet, its heading row, its first grid column (a
+    multiple of GRID_COLS on a companion sheet) and its first data row."""
+
+    plan: SheetPlan
+    heading: int
+    col0: int
+    first_data: int
+
+    @property
+    def first_header(self) -> int:
+        return self.first_data - TABLE_HEADER_ROWS
+
+
+def _companion_places(
+    plan: SheetPlan, table: _TableParts, groups: list[list[int]]
+) -> dict[int, _ChunkPlace]:
+    """A companion sheet for each group of chunks, its chunks side by side (band b at grid
+    columns GRID_COLS*b...), all on the same rows: the heading on FIRST_BLOCK_ROW, then
+    the header rows, then the data. One print block; its heading and header rows repeat
+    on every page (pagination.py)."""
+    places: dict[int, _ChunkPlace] = {}
+    heading = FIRST_BLOCK_ROW
+    first_data = heading + 1 + TABLE_HEADER_ROWS
+    last = first_data + len(table.contexts) - 1
+    for group in groups:
+        companion = SheetPlan(
+            companion_name(plan.name, len(plan.companions) + 1, plan.taken),
+            f"{plan.title} (continued from sheet {plan.name})",
+            plan.template,
+            dict(plan.ctx),
+            bands=len(group),
+            companion_of=plan.name,
+        )
+        companion.last_col = GRID_COLS * len(group) - 1
+        companion.blocks.append(
+            PrintBlock(heading, max(last, first_data - 1), (heading, first_data - 1), table.name)
+        )
+        companion.last_row = last + 1
+        plan.companions.append(companion)
+        for band, k in enumerate(group):
+            places[k] = _ChunkPlace(companion, heading, GRID_COLS * band, first_data)
+    return dict(sorted(places.items()))
+
+
+def companion_name(sheet: str, n: int, taken: set[str]) -> str:
+    """A companion sheet of calc sheet `sheet` (tables taller than a page), its n-th or the
+    next whose name no sheet has (ignoring case); the name joins `taken`."""
+    while True:
+        name = f"{sheet}_tab" if n == 1 else f"{sheet}_tab{n}"
+        if name.lower() not in taken:
+            taken.add(name.lower())
+            return name
+        n += 1
+
+
+def _place_pointer(
+    plan: SheetPlan, table: _TableParts, places: dict[int, _ChunkPlace], row: int
+) -> int:
+    """On the calc sheet, where a table's first moved chunk would be: the table's title and
+    which of its parts print on which companion sheet."""
+    n = len(table.chunks)
+    sheets: dict[str, list[int]] = {}
+    for k, place in sorted(places.items()):
+        if place.plan is not plan:
+            sheets.setdefault(place.plan.name, []).append(k + 1)
+    where = "; ".join(
+        (
+            f"part{'s' if len(parts) > 1 else ''} {', '.join(map(str, parts))} of {n}, "
+            if n > 1
+            else ""
+        )
+        + f"on sheet {sheet}"
+        for sheet, parts in sheets.items()
+    )
+    text = (
+        f"Taller than a page, printed {where} (parts side by side, each with its header rows "
+        "at the top of every page)."
+    )
+    plan.cells.append(_heading(row, table.title or table.name))
+    plan.cells.append(Cell(row + 1, 0, "note", text=text, span=GRID_COLS))
+    plan.blocks.append(PrintBlock(row, row + 1))
+    return row + 2
+
+
+def _place_chunk_head(place: _ChunkPlace, table: _TableParts, k: int) -> None:
+    """Chunk k's heading ("part k of n") and its header rows: header, unit, clause and the
+    column equation (equation_layout.py)."""
+    plan, c0, row = place.plan, place.col0, place.first_header
+    chunks, columns = table.chunks, table.columns
+    if table.title:
+        part = f" (part {k + 1} of {len(chunks)})" if len(chunks) > 1 else ""
+        plan.cells.append(
+            Cell(place.heading, c0, "heading", text=table.title + part, span=GRID_COLS)
+        )
+    chunk = chunks[k]
+    placed = chunk if k == 0 else [ChunkColumn(0, 0, 1), *chunk]
+    for pc in placed:
+        col = columns[pc.index]
+        at = c0 + pc.grid_col
+        plan.cells += [
+            Cell(row, at, "th", text=col.header, span=pc.span),
+            Cell(row + 1, at, "th_unit", text=col.unit, span=pc.span),
+            Cell(row + 2, at, "th_clause", text=substitute_ctx(col.clause, plan.ctx), span=pc.span),
+        ]
+        if pc in chunk and (col.formula is not None or col.equation):
+            shifted = ChunkColumn(pc.index, at, pc.span)
+            plan.column_equations.append(_column_equation(plan, col, table.name, row + 3, shifted))
+    plan.header_rows.append((row, row + TABLE_HEADER_ROWS - 1))
+
+
+def _place_chunk_rows(
+    place: _ChunkPlace, table: _TableParts, k: int, context: Context, registry: Registry
+) -> None:
+    """Chunk k's data cells (and the repeated key column of a later chunk)."""
+    plan, c0, first = place.plan, place.col0, place.first_data
+    tpos, columns = table.tpos, table.columns
+    for i, merged in enumerate(table.contexts):
+        if k > 0:
+            plan.cells.append(_key_copy(columns[0], merged, first + i, tpos.key, c0))
+        for pc in table.chunks[k]:
+            cell = _table_cell(
+                plan,
+                columns[pc.index],
+                merged,
+                table.name,
+                first + i,
+                c0 + pc.grid_col,
+                context,
+                registry,
+            )
+            cell.span = pc.span
+            cell.table_row = tpos.first_row + i
+            plan.cells.append(cell)
 
 
 def _column_equation(
@@ -392,11 +555,11 @@ def _column_equation(
     )
 
 
-def _key_copy(key_column: Column, ctx: dict[str, Any], row: int, key: str) -> Cell:
+def _key_copy(key_column: Column, ctx: dict[str, Any], row: int, key: str, col: int = 0) -> Cell:
     """The key column repeated in a later chunk, as text: the key column's text (a level,
     line or segment id), else the row's key."""
     text = substitute_ctx(key_column.text, ctx) if key_column.text is not None else ctx[key]
-    return Cell(row, 0, "text", text=str(text))
+    return Cell(row, col, "text", text=str(text))
 
 
 def _table_cell(

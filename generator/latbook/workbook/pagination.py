@@ -7,9 +7,11 @@ straddles two; a block taller than a page is broken between rows. A sheet may re
 range of rows (Excel's print titles), which LibreOffice and Excel print on every page after
 it: the header rows of a table chunk taller than a page, so that its continuation pages
 carry its header. With one range per sheet, a sheet with more than one such chunk, or
-blocks after it, cannot have the right header on every page: `paginate` picks the chunk
-that helps most, or none where any choice would print a header over more foreign pages
-than its own (`foreign_header_pages`).
+blocks after it, cannot have the right header on every page; such chunks print on
+companion sheets (companions.py), which leaves a calc sheet at most one, its last block.
+`paginate` still picks the chunk that helps most, or none where any choice would print a
+header over more foreign pages than its own (`foreign_header_pages`). A companion sheet
+prints its bands of columns side by side on pages of their own (`SheetPages.bands`).
 With these breaks LibreOffice needs none of its own, so the page count here is the printed
 one (tests/test_print_legibility.py compares them).
 """
@@ -35,19 +37,27 @@ from latbook.workbook.styles import font_of
 TITLE_ROW, CAUTION_ROW = 0, 1
 
 
+def may_break(block_height_pt: float) -> bool:
+    """A block this tall may be broken between rows: it does not fit a page with the blank
+    row that precedes it (which may have to start the page, when the page before is full)."""
+    return block_height_pt + ROW_MIN_PT > printable_height_pt()
+
+
 @dataclass
 class SheetPages:
     """How a sheet prints: row heights (pt), the rows that start a new page, the repeated
-    header rows (first, last) or None, and the last printed row."""
+    header rows (first, last) or None, the last printed row, and the bands of grid columns
+    side by side (a companion sheet; each band prints the same rows on pages of its own)."""
 
     heights: dict[int, float] = field(default_factory=dict)
     breaks: list[int] = field(default_factory=list)
     repeat: tuple[int, int] | None = None
     last_row: int = 0
+    bands: int = 1
 
     @property
     def pages(self) -> int:
-        return len(self.breaks) + 1
+        return (len(self.breaks) + 1) * self.bands
 
 
 def cell_text(cell: Cell, results: Mapping[str, Any]) -> str | None:
@@ -88,10 +98,15 @@ def row_heights(
 
 
 def title_cells(plan: SheetPlan, caution: str) -> list[Cell]:
-    """The sheet title and the caution line, across the grid."""
+    """The sheet title and the caution line, across the grid (in each band of a companion
+    sheet: the first page of each band prints them)."""
     return [
-        Cell(TITLE_ROW, 0, "title", text=plan.title, span=GRID_COLS),
-        Cell(CAUTION_ROW, 0, "caution", text=caution, span=GRID_COLS),
+        cell
+        for band in range(plan.bands)
+        for cell in (
+            Cell(TITLE_ROW, band * GRID_COLS, "title", text=plan.title, span=GRID_COLS),
+            Cell(CAUTION_ROW, band * GRID_COLS, "caution", text=caution, span=GRID_COLS),
+        )
     ]
 
 
@@ -100,12 +115,11 @@ def paginate(plan: SheetPlan, heights: Mapping[int, float]) -> SheetPages:
     chunks taller than a page, the one whose header helps most (its own continuation
     pages less the later pages it would print on, the last of equals); none where every
     choice prints a header on more foreign pages than on its own."""
-    page_h = printable_height_pt()
     tall = [
         b
         for b in plan.blocks
         if b.header is not None
-        and sum(heights.get(r, ROW_MIN_PT) for r in range(b.first_row, b.last_row + 1)) > page_h
+        and may_break(sum(heights.get(r, ROW_MIN_PT) for r in range(b.first_row, b.last_row + 1)))
     ]
     best = _paginate(plan, heights, None)
     best_score = 0
@@ -124,7 +138,7 @@ def _paginate(
     page_h = printable_height_pt()
     blocks = plan.blocks
     last = blocks[-1].last_row if blocks else max(heights, default=0)
-    pages = SheetPages(dict(heights), [], repeat, last)
+    pages = SheetPages(dict(heights), [], repeat, last, plan.bands)
     rep = repeat
 
     def height(r0: int, r1: int) -> float:
@@ -148,6 +162,11 @@ def _paginate(
             pages.breaks.append(gap_start)
             y = top(gap_start) + gap + bh
             continue
+        if y + gap <= page_h and top(b.first_row) + bh <= page_h:
+            # fits a page without the blank row before it: that row ends this page
+            pages.breaks.append(b.first_row)
+            y = top(b.first_row) + bh
+            continue
         # Taller than a page: start it on a fresh page unless a good part fits here.
         lead = height(b.first_row, min(b.first_row + 5, b.last_row))
         if gap_start > 0 and y + gap + lead > page_h:
@@ -163,16 +182,18 @@ def _paginate(
     return pages
 
 
-def greedy_pages(heights: Iterable[float]) -> int:
-    """Pages a sheet without manual breaks fills, row after row (the Cover, Tables)."""
+def greedy_breaks(heights: list[float]) -> list[int]:
+    """Rows that start a page when rows fill pages one after another (the Cover, Tables):
+    within the printable height less the safety share, so that LibreOffice, given these
+    breaks, needs none of its own."""
     page_h = printable_height_pt()
-    pages, y = 1, 0.0
-    for h in heights:
+    breaks, y = [], 0.0
+    for r, h in enumerate(heights):
         if y + h > page_h and y > 0:
-            pages += 1
+            breaks.append(r)
             y = 0.0
         y += h
-    return pages
+    return breaks
 
 
 def foreign_header_pages(plan: SheetPlan, pages: SheetPages) -> int:

@@ -55,8 +55,9 @@ def col_width_pt(width_units: float) -> float:
 
 
 def span_width_pt(first_col: int, span: int) -> float:
-    """Printed width of grid columns first_col .. first_col + span - 1."""
-    return sum(col_width_pt(GRID_WIDTHS[c]) for c in range(first_col, first_col + span))
+    """Printed width of grid columns first_col .. first_col + span - 1 (a companion sheet
+    repeats the grid in bands side by side)."""
+    return sum(col_width_pt(GRID_WIDTHS[c % GRID_COLS]) for c in range(first_col, first_col + span))
 
 
 def printable_width_pt() -> float:

@@ -44,7 +44,9 @@ class TablePos:
 
     A table printed in column chunks (layout.py) holds each field's column in the rows of
     its chunk: `rows` are the first chunk's rows and `offsets[field]` is added for the
-    field's chunk (0 in the first)."""
+    field's chunk (0 in the first). A table taller than a page prints on sheets of its own
+    (`sheets[field]`, its chunks side by side; companions.py); `sheet` is its first chunk's
+    sheet."""
 
     name: str
     sheet: str
@@ -55,6 +57,7 @@ class TablePos:
     patterns: dict[str, str] = field(default_factory=dict)  # field -> quantity id pattern
     bindings: dict[str, dict[str, str]] = field(default_factory=dict)  # key -> ctx used by ids
     offsets: dict[str, int] = field(default_factory=dict)  # field -> rows below the first chunk
+    sheets: dict[str, str] = field(default_factory=dict)  # field -> its sheet, where not `sheet`
 
     @property
     def last_row(self) -> int:
@@ -63,6 +66,10 @@ class TablePos:
     def row_of(self, field_name: str, row: int) -> int:
         """Sheet row of `field_name` in the table row whose first-chunk row is `row`."""
         return row + self.offsets.get(field_name, 0)
+
+    def sheet_of(self, field_name: str) -> str:
+        """The sheet that holds `field_name`'s column."""
+        return self.sheets.get(field_name, self.sheet)
 
     def cell(self, key: str, field_name: str) -> tuple[int, int]:
         """(row, col) of `field_name` in the row keyed `key`."""

@@ -21,6 +21,8 @@ def cell_formula(cell: Cell, sheet: str, registry: Registry) -> str:
     """The Excel formula ("=...") of one formula cell of `sheet`."""
     if cell.formula is None:
         raise ValueError(f"cell {sheet} row {cell.row} col {cell.col} has no formula")
+    if cell.rendered is not None:  # rendered once already, with this layout's registry
+        return cell.rendered
     return render(
         cell.formula,
         registry=registry,
